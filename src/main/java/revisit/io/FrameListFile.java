@@ -34,6 +34,9 @@ public final class FrameListFile {
     /** Version written by {@link #write} and the newest {@link #read} accepts. */
     public static final int VERSION = 1;
 
+    /** Largest frame list read, bytes: 256 MiB, several million frames; keeps a wrong file from filling memory. */
+    static final long MAX_BYTES = 256L << 20;
+
     private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final String LINE_SHAPE = "write '<seconds> <image path>'";
 
@@ -117,6 +120,10 @@ public final class FrameListFile {
             throw new BadInputException(listFile + ": frame list not found; check the path");
         }
         try {
+            if (Files.size(listFile) > MAX_BYTES) {
+                throw new BadInputException(listFile + ": " + Files.size(listFile) + " bytes, too large for a frame "
+                        + "list (limit " + MAX_BYTES + "); check that this is the frame list, or split it");
+            }
             List<String> lines = new ArrayList<>(Files.readAllLines(listFile, StandardCharsets.UTF_8));
             if (!lines.isEmpty()) {
                 lines.set(0, stripBom(lines.get(0)));

@@ -20,6 +20,9 @@ public final class FrameSources {
             "tiff");
     /** File-name extensions (lower case) opened as video. */
     public static final Set<String> VIDEO_EXTENSIONS = Set.of("mp4", "mov", "m4v");
+    /** Video containers that are recognised by name but not read. */
+    private static final Set<String> OTHER_VIDEO_EXTENSIONS = Set.of("avi", "mkv", "webm", "mpg", "mpeg", "ts",
+            "wmv", "flv", "3gp");
 
     private FrameSources() {
     }
@@ -50,6 +53,11 @@ public final class FrameSources {
         String extension = extension(input);
         if (VIDEO_EXTENSIONS.contains(extension)) {
             return VideoFrameSource.open(input, options);
+        }
+        if (OTHER_VIDEO_EXTENSIONS.contains(extension)) {
+            throw new BadInputException(input + ": ." + extension + " videos are not read (only MP4/MOV with "
+                    + "H.264); convert it, e.g. 'ffmpeg -i IN -pix_fmt yuv420p -c:v libx264 OUT.mp4', or extract "
+                    + "the frames to a folder");
         }
         if (IMAGE_EXTENSIONS.contains(extension)) {
             throw new BadInputException(input + ": a single image, not a sequence; give the folder that holds "

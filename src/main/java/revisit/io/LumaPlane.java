@@ -7,8 +7,9 @@ import org.jcodec.common.model.Rect;
 /**
  * Copies the luma plane of a decoded jcodec picture into a grey image. jcodec stores 8-bit samples shifted to
  * signed bytes ({@code stored = value - 128}), so the copy adds 128 back; the picture's crop rectangle (from the
- * stream's frame cropping, e.g. 426 of 432 coded columns) gives the output size. About 10x cheaper than jcodec's
- * own colour conversion to an RGB BufferedImage followed by luma (see {@code VideoDecodeBench}).
+ * stream's frame cropping, e.g. 426 of 432 coded columns) gives the output size. Taking the luma plane keeps the
+ * coded Y samples exactly (bit-identical to FFmpeg's decoder on the shared test videos) and skips a colour
+ * round trip; decoding itself dominates the time (see {@code VideoDecodeBench} in docs/FORMAT-frames.md).
  */
 final class LumaPlane {
 

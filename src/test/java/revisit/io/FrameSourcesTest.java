@@ -104,6 +104,9 @@ class FrameSourcesTest {
         Path notList = dir.resolve("notes.csv");
         Files.writeString(notList, "t,file\n");
         assertTrue(reject(notList).contains("line 1: missing header"));
+        Path avi = dir.resolve("clip.avi");
+        Files.write(avi, new byte[]{1, 2, 3});
+        assertTrue(reject(avi).startsWith(avi + ": .avi videos are not read"));
     }
 
     @Test
