@@ -53,7 +53,7 @@ public final class PoseLabels {
         FrameTimeline timeline = new FrameTimeline(sequences);
         LabelBuilder builder = new LabelBuilder(timeline, config.window(), config.maxPairs());
         try {
-            collect(all, config, timeline, builder);
+            collect(all, config, builder);
         } catch (LabelBuilder.LabelLimitException e) {
             throw new BadInputException("ground-truth poses give more than " + config.maxPairs()
                     + " labelled pairs; lower maxDistance or widen the exclusion window (a resting camera gives"
@@ -62,8 +62,8 @@ public final class PoseLabels {
         return builder.build();
     }
 
-    private static void collect(List<StampedPose> poses, PoseLabelConfig config, FrameTimeline timeline,
-                                LabelBuilder builder) {
+    /** Adds every near pair (m before q); the builder drops and counts those inside the exclusion window. */
+    private static void collect(List<StampedPose> poses, PoseLabelConfig config, LabelBuilder builder) {
         int n = poses.size();
         long[] keys = new long[n];
         long[] sortedKeys = new long[n];
@@ -86,8 +86,7 @@ public final class PoseLabels {
                 for (int k = at; k < n && sortedKeys[k] == key; k++) {
                     int m = order[k];
                     if (m < q && pq.distanceTo(poses.get(m)) <= config.maxDistance()
-                            && (config.maxViewAngleDegrees() >= 180 || dot(axes[q], axes[m]) >= cosLimit)
-                            && timeline.allows(config.window(), q, m)) {
+                            && (config.maxViewAngleDegrees() >= 180 || dot(axes[q], axes[m]) >= cosLimit)) {
                         builder.add(q, m);
                     }
                 }
