@@ -1,5 +1,6 @@
 package revisit.evaluation;
 
+import java.util.Collections;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -29,7 +30,7 @@ public record EvaluationResult(EvaluationConfig config, int queries, int positiv
         for (MissReason r : MissReason.values()) {
             copy.put(r, missReasons.getOrDefault(r, 0));
         }
-        missReasons = java.util.Collections.unmodifiableMap(copy);
+        missReasons = Collections.unmodifiableMap(copy);
         detections = List.copyOf(detections);
     }
 }

@@ -3,6 +3,7 @@ package revisit.evaluation;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import revisit.io.AtomicFiles;
 
@@ -58,8 +59,8 @@ public final class HtmlReport {
         List<PairRow> rows = new ArrayList<>();
         for (int i = 0; i < input.pairs().size(); i++) {
             ImagePair p = input.pairs().get(i);
-            String q = String.format(java.util.Locale.ROOT, "pair-%03d-query.png", i);
-            String m = String.format(java.util.Locale.ROOT, "pair-%03d-match.png", i);
+            String q = String.format(Locale.ROOT, "pair-%03d-query.png", i);
+            String m = String.format(Locale.ROOT, "pair-%03d-match.png", i);
             Optional<String> qProblem = Thumbnails.write(p.queryImage(), folder.resolve(q), THUMB_WIDTH);
             Optional<String> mProblem = Thumbnails.write(p.matchImage(), folder.resolve(m), THUMB_WIDTH);
             rows.add(new PairRow(p, qProblem.isEmpty() ? Optional.of(q) : Optional.empty(), qProblem,

@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import revisit.io.BadInputException;
 import revisit.io.StampedPose;
@@ -87,7 +88,7 @@ public final class KrtCameraFile {
             }
         }
         checkRotation(file, lineNumber, v);
-        double[] k = java.util.Arrays.copyOfRange(v, 0, 9);
+        double[] k = Arrays.copyOfRange(v, 0, 9);
         if (!(k[0] > 0) || !(k[4] > 0) || k[3] != 0 || k[6] != 0 || k[7] != 0 || k[8] != 1) {
             throw new BadInputException(file + ":" + lineNumber + ": K is not an upper-triangular intrinsic matrix"
                     + " with positive focal lengths and k33 = 1");

@@ -117,9 +117,9 @@ public final class PairsFile {
     public static void write(Path file, RevisitLabels labels) {
         boolean ids = labels.timeline().sequences().size() > 1;
         StringBuilder sb = new StringBuilder(MAGIC).append(" frames\n# query match\n");
-        for (FrameKey[] pair : labels.pairs()) {
-            sb.append(ids ? pair[0].toString() : Integer.toString(pair[0].frame())).append(' ')
-                    .append(ids ? pair[1].toString() : Integer.toString(pair[1].frame())).append('\n');
+        for (RevisitPair pair : labels.pairs()) {
+            sb.append(ids ? pair.query().toString() : Integer.toString(pair.query().frame())).append(' ')
+                    .append(ids ? pair.match().toString() : Integer.toString(pair.match().frame())).append('\n');
         }
         AtomicFiles.writeString(file, sb.toString());
     }

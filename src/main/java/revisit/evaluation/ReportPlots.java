@@ -6,6 +6,8 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Rectangle2D;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
+import java.util.function.BiConsumer;
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
@@ -68,7 +70,7 @@ public final class ReportPlots {
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(Color.LIGHT_GRAY);
         plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
-        String title = String.format(java.util.Locale.ROOT, "Precision-recall (AP %.3f, recall at 100%% precision %.3f)",
+        String title = String.format(Locale.ROOT, "Precision-recall (AP %.3f, recall at 100%% precision %.3f)",
                 result.averagePrecision(), result.atFullPrecision().recall());
         JFreeChart chart = new JFreeChart(title, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
         chart.setBackgroundPaint(Color.WHITE);
@@ -94,7 +96,7 @@ public final class ReportPlots {
 
     /** Verified detections split into true and false series of (x, y) from a mapping of frames to coordinates. */
     static XYSeriesCollection detectionSeries(List<JudgedDetection> detections, double threshold,
-                                              java.util.function.BiConsumer<JudgedDetection, XYSeries> add) {
+                                              BiConsumer<JudgedDetection, XYSeries> add) {
         XYSeries right = new XYSeries("true detection", false, true);
         XYSeries wrong = new XYSeries("false detection", false, true);
         for (JudgedDetection d : detections) {

@@ -97,11 +97,11 @@ public final class RevisitLabels {
     }
 
     /** All kept pairs as (query, match) frame keys, query in scan order, for writing or plotting. */
-    public List<FrameKey[]> pairs() {
-        List<FrameKey[]> out = new ArrayList<>(matches.length);
+    public List<RevisitPair> pairs() {
+        List<RevisitPair> out = new ArrayList<>(matches.length);
         for (int q = 0; q < timeline.size(); q++) {
             for (int k = offsets[q]; k < offsets[q + 1]; k++) {
-                out.add(new FrameKey[]{timeline.keyOf(q), timeline.keyOf(matches[k])});
+                out.add(new RevisitPair(timeline.keyOf(q), timeline.keyOf(matches[k])));
             }
         }
         return out;

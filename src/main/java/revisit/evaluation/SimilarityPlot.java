@@ -1,15 +1,19 @@
 package revisit.evaluation;
 
+import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Paint;
+import java.awt.geom.Ellipse2D;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.DatasetRenderingOrder;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.PaintScale;
 import org.jfree.chart.renderer.xy.XYBlockRenderer;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.PaintScaleLegend;
+import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.data.xy.DefaultXYZDataset;
 import org.jfree.data.xy.XYSeries;
@@ -28,34 +32,23 @@ public final class SimilarityPlot {
     public static JFreeChart chart(SimilarityMatrix m, RevisitLabels labels, EvaluationResult result) {
         double[] range = m.range();
         Ramp ramp = new Ramp(range[0], range[1] > range[0] ? range[1] : range[0] + 1);
-        XYBlockRenderer blocks = new XYBlockRenderer();
-        blocks.setBlockWidth((double) m.frames() / m.bins());
-        blocks.setBlockHeight((double) m.frames() / m.bins());
-        blocks.setBlockAnchor(org.jfree.chart.ui.RectangleAnchor.BOTTOM_LEFT);
-        blocks.setPaintScale(ramp);
-        blocks.setSeriesVisibleInLegend(0, false);
-        NumberAxis x = new NumberAxis("matched frame (scan order)");
-        NumberAxis y = new NumberAxis("query frame (scan order)");
-        x.setRange(0, m.frames());
-        y.setRange(0, m.frames());
-        y.setInverted(true);
-        XYPlot plot = new XYPlot(cells(m), x, y, blocks);
+        XYPlot plot = new XYPlot(cells(m), frameAxis("matched frame (scan order)", m, false),
+                frameAxis("query frame (scan order)", m, true), blockRenderer(m, ramp));
         plot.setBackgroundPaint(new Color(235, 235, 235));
         plot.setDataset(1, labelCells(m, labels));
-        XYLineAndShapeRenderer labelRenderer = ReportPlots.hollowSquares(ReportPlots.LABEL, 7);
-        plot.setRenderer(1, labelRenderer);
+        plot.setRenderer(1, ReportPlots.hollowSquares(ReportPlots.LABEL, 7));
         plot.setDataset(2, ReportPlots.detectionSeries(result.detections(),
                 result.config().acceptanceThreshold(), (d, s) -> s.add(
                         labels.timeline().globalIndex(d.match()), labels.timeline().globalIndex(d.query()))));
         XYLineAndShapeRenderer det = ReportPlots.pointRenderer(ReportPlots.TRUE, 5);
         det.setSeriesPaint(1, ReportPlots.FALSE);
-        det.setSeriesShape(1, new java.awt.geom.Ellipse2D.Double(-2.5, -2.5, 5, 5));
+        det.setSeriesShape(1, new Ellipse2D.Double(-2.5, -2.5, 5, 5));
         plot.setRenderer(2, det);
-        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
+        plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
         for (int s = 1; s < labels.timeline().sequences().size(); s++) {
             double at = labels.timeline().firstGlobalOf(s);
-            plot.addDomainMarker(new ValueMarker(at, Color.WHITE, new java.awt.BasicStroke(1f)));
-            plot.addRangeMarker(new ValueMarker(at, Color.WHITE, new java.awt.BasicStroke(1f)));
+            plot.addDomainMarker(new ValueMarker(at, Color.WHITE, new BasicStroke(1f)));
+            plot.addRangeMarker(new ValueMarker(at, Color.WHITE, new BasicStroke(1f)));
         }
         JFreeChart chart = new JFreeChart("Similarity with labels (squares) and detections (dots)",
                 JFreeChart.DEFAULT_TITLE_FONT, plot, true);
@@ -65,6 +58,23 @@ public final class SimilarityPlot {
         chart.addSubtitle(legend);
         chart.setBackgroundPaint(Color.WHITE);
         return chart;
+    }
+
+    private static NumberAxis frameAxis(String label, SimilarityMatrix m, boolean downwards) {
+        NumberAxis axis = new NumberAxis(label);
+        axis.setRange(0, m.frames());
+        axis.setInverted(downwards);
+        return axis;
+    }
+
+    private static XYBlockRenderer blockRenderer(SimilarityMatrix m, PaintScale scale) {
+        XYBlockRenderer blocks = new XYBlockRenderer();
+        blocks.setBlockWidth((double) m.frames() / m.bins());
+        blocks.setBlockHeight((double) m.frames() / m.bins());
+        blocks.setBlockAnchor(RectangleAnchor.BOTTOM_LEFT);
+        blocks.setPaintScale(scale);
+        blocks.setSeriesVisibleInLegend(0, false);
+        return blocks;
     }
 
     private static DefaultXYZDataset cells(SimilarityMatrix m) {

@@ -2,9 +2,11 @@ package revisit.evaluation;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
+import java.awt.geom.Ellipse2D;
 import java.util.List;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.DatasetRenderingOrder;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.data.xy.XYSeries;
@@ -28,19 +30,11 @@ public final class TrajectoryPlot {
     public static JFreeChart chart(List<StampedPose> poses, RevisitLabels labels, EvaluationResult result) {
         int[] axes = widestAxes(poses);
         String[] names = {"x", "y", "z"};
-        XYSeriesCollection paths = new XYSeriesCollection();
-        FrameTimeline t = labels.timeline();
-        for (int s = 0; s < t.sequences().size(); s++) {
-            XYSeries path = new XYSeries("path " + t.sequences().get(s).sequenceId(), false, true);
-            for (int g = t.firstGlobalOf(s); g < t.endGlobalOf(s); g++) {
-                path.add(coord(poses.get(g), axes[0]), coord(poses.get(g), axes[1]));
-            }
-            paths.addSeries(path);
-        }
         NumberAxis x = new NumberAxis(names[axes[0]]);
         NumberAxis y = new NumberAxis(names[axes[1]]);
         x.setAutoRangeIncludesZero(false);
         y.setAutoRangeIncludesZero(false);
+        XYSeriesCollection paths = paths(poses, labels.timeline(), axes);
         XYLineAndShapeRenderer pathRenderer = new XYLineAndShapeRenderer(true, false);
         for (int s = 0; s < paths.getSeriesCount(); s++) {
             pathRenderer.setSeriesPaint(s, s == 0 ? Color.DARK_GRAY : new Color(120, 120, 200));
@@ -48,16 +42,16 @@ public final class TrajectoryPlot {
         XYPlot plot = new XYPlot(paths, x, y, pathRenderer);
         plot.setDataset(1, segments("labelled revisit", labelPairs(labels), poses, axes));
         plot.setRenderer(1, segmentRenderer(ReportPlots.LABEL, 3f));
-        XYSeriesCollection det = ReportPlots.detectionSeries(result.detections(),
-                result.config().acceptanceThreshold(), (d, s) -> addSegment(s, poses.get(t.globalIndex(d.query())),
-                        poses.get(t.globalIndex(d.match())), axes));
-        plot.setDataset(2, det);
+        FrameTimeline t = labels.timeline();
+        plot.setDataset(2, ReportPlots.detectionSeries(result.detections(), result.config().acceptanceThreshold(),
+                (d, s) -> addSegment(s, poses.get(t.globalIndex(d.query())), poses.get(t.globalIndex(d.match())),
+                        axes)));
         XYLineAndShapeRenderer detRenderer = segmentRenderer(ReportPlots.TRUE, 1.5f);
-        detRenderer.setDefaultShape(new java.awt.geom.Ellipse2D.Double(-2, -2, 4, 4));
+        detRenderer.setDefaultShape(new Ellipse2D.Double(-2, -2, 4, 4));
         detRenderer.setSeriesPaint(1, ReportPlots.FALSE);
         detRenderer.setSeriesStroke(1, new BasicStroke(1.5f));
         plot.setRenderer(2, detRenderer);
-        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
+        plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(Color.LIGHT_GRAY);
         plot.setRangeGridlinePaint(Color.LIGHT_GRAY);
@@ -65,6 +59,19 @@ public final class TrajectoryPlot {
                 plot, true);
         chart.setBackgroundPaint(Color.WHITE);
         return chart;
+    }
+
+    /** One path series per sequence. */
+    private static XYSeriesCollection paths(List<StampedPose> poses, FrameTimeline t, int[] axes) {
+        XYSeriesCollection paths = new XYSeriesCollection();
+        for (int s = 0; s < t.sequences().size(); s++) {
+            XYSeries path = new XYSeries("path " + t.sequences().get(s).sequenceId(), false, true);
+            for (int g = t.firstGlobalOf(s); g < t.endGlobalOf(s); g++) {
+                path.add(coord(poses.get(g), axes[0]), coord(poses.get(g), axes[1]));
+            }
+            paths.addSeries(path);
+        }
+        return paths;
     }
 
     private static int[][] labelPairs(RevisitLabels labels) {
@@ -99,7 +106,7 @@ public final class TrajectoryPlot {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, true);
         r.setSeriesPaint(0, color);
         r.setSeriesStroke(0, new BasicStroke(width));
-        r.setDefaultShape(new java.awt.geom.Ellipse2D.Double(-3, -3, 6, 6));
+        r.setDefaultShape(new Ellipse2D.Double(-3, -3, 6, 6));
         r.setAutoPopulateSeriesShape(false);
         r.setDrawSeriesLineAsPath(false);
         return r;

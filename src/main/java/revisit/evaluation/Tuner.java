@@ -1,6 +1,7 @@
 package revisit.evaluation;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import java.util.function.Consumer;
@@ -80,7 +81,7 @@ public final class Tuner {
     public static HeldOutResult tuneAndTest(ParameterSpace space, SweepConfig config,
                                             Function<ParameterSetting, List<QueryOutcome>> run, RevisitLabels labels,
                                             Set<String> tuneSequences, Consumer<TunedSetting> writer) {
-        Set<String> testSequences = new java.util.HashSet<>(labels.timeline().sequenceIds());
+        Set<String> testSequences = new HashSet<>(labels.timeline().sequenceIds());
         testSequences.removeAll(tuneSequences);
         if (testSequences.isEmpty() || testSequences.size() == labels.timeline().sequenceIds().size()) {
             throw new IllegalArgumentException("tuning sequences " + tuneSequences + " must be a proper, non-empty"

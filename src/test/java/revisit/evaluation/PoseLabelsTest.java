@@ -33,8 +33,8 @@ class PoseLabelsTest {
 
     private static List<String> pairsOf(RevisitLabels labels) {
         List<String> out = new ArrayList<>();
-        for (FrameKey[] p : labels.pairs()) {
-            out.add((p[0].frame() + 1) + "-" + (p[1].frame() + 1));
+        for (RevisitPair p : labels.pairs()) {
+            out.add((p.query().frame() + 1) + "-" + (p.match().frame() + 1));
         }
         return out;
     }

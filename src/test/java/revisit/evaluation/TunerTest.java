@@ -49,6 +49,16 @@ class TunerTest {
         return b.build();
     }
 
+    /** Labels where only queries 300..303 of sequence "a" are positive, each revisiting q - 200. */
+    private static RevisitLabels fourPositives() {
+        LabelBuilder builder = new LabelBuilder(FrameTimeline.of(SequenceFrames.uniform("a", FRAMES, 10)),
+                ExclusionWindow.defaults());
+        for (int k = 300; k <= 303; k++) {
+            builder.add(new FrameKey("a", k), new FrameKey("a", k - 200));
+        }
+        return builder.build();
+    }
+
     private static final ParameterSpace SPACE = new ParameterSpace(List.of(ParameterRange.integers("minInliers", 0, 30),
             ParameterRange.linear("unused", 0, 1, 3)));
 
@@ -96,12 +106,7 @@ class TunerTest {
     @Test
     void breaksRecallTiesByF1ThenAveragePrecision() {
         // Hand-made outcome lists, 4 positives (queries 300..303 revisit q - 200).
-        LabelBuilder builder = new LabelBuilder(FrameTimeline.of(SequenceFrames.uniform("a", FRAMES, 10)),
-                ExclusionWindow.defaults());
-        for (int k = 300; k <= 303; k++) {
-            builder.add(new FrameKey("a", k), new FrameKey("a", k - 200));
-        }
-        RevisitLabels labels = builder.build();
+        RevisitLabels labels = fourPositives();
         FrameKey[] q = {new FrameKey("a", 300), new FrameKey("a", 301), new FrameKey("a", 302), new FrameKey("a", 303)};
         FrameKey wrong = new FrameKey("a", 7);
         QueryOutcome t0 = QueryOutcome.of(q[0], new FrameKey("a", 100), 9, StageReached.VERIFIED);
@@ -139,12 +144,7 @@ class TunerTest {
         // t2 6: best recall at precision >= 0.6 is 0.5 at threshold 8 with precision 2/3 (F1 4/7 = 0.571);
         // AP (1 + 2/3 + 3/7) / 4 = 0.524. Variant 1: t0 9, t1 8, false 5: recall 0.5 with precision 1 (F1 2/3);
         // AP (1 + 1) / 4 = 0.5. Same recall; variant 1 wins on F1 although its AP is lower.
-        LabelBuilder builder = new LabelBuilder(FrameTimeline.of(SequenceFrames.uniform("a", FRAMES, 10)),
-                ExclusionWindow.defaults());
-        for (int k = 300; k <= 303; k++) {
-            builder.add(new FrameKey("a", k), new FrameKey("a", k - 200));
-        }
-        RevisitLabels labels = builder.build();
+        RevisitLabels labels = fourPositives();
         List<QueryOutcome> variant0 = new ArrayList<>();
         List<QueryOutcome> variant1 = new ArrayList<>();
         variant0.add(QueryOutcome.of(new FrameKey("a", 300), new FrameKey("a", 100), 9, StageReached.VERIFIED));
