@@ -66,9 +66,7 @@ public final class PairsFile {
         try {
             for (int q = parsed.queryFirst(); q <= parsed.queryLast(); q++) {
                 for (int m = parsed.matchFirst(); m <= parsed.matchLast(); m++) {
-                    if (q != m) {
-                        builder.add(q, m);
-                    }
+                    builder.add(q, m);
                 }
             }
         } catch (LabelBuilder.LabelLimitException e) {

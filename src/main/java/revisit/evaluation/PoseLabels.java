@@ -33,7 +33,8 @@ public final class PoseLabels {
     }
 
     /**
-     * Labels for several sequences scanned in the map's iteration order; frame times are the pose times.
+     * Labels for several sequences scanned in the map's iteration order (pass a LinkedHashMap); frame times are
+     * the pose times.
      *
      * @param posesBySequence poses of each sequence, one per frame, times strictly increasing
      * @throws BadInputException when the labels would exceed the pair cap or the trajectory is too large for the
