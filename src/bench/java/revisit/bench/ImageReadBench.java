@@ -36,7 +36,7 @@ public class ImageReadBench {
 
     @Setup
     public void locate() {
-        file = SharedData.file(image);
+        file = FrameInputData.file(image);
     }
 
     @Benchmark

@@ -55,7 +55,7 @@ public class VideoDecodeBench {
 
     @Setup
     public void open() throws Exception {
-        file = SharedData.file("video/" + video);
+        file = FrameInputData.file("video/" + video);
         source = FrameSources.open(file, 30.0);
         channel = NIOUtils.readableChannel(file.toFile());
         grab = FrameGrab.createFrameGrab(channel);

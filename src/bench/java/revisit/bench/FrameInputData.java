@@ -5,9 +5,9 @@ import java.nio.file.Path;
 import java.util.List;
 
 /** Finds a file of ../shared/data (see its README.md for sources and licences) from the working directory. */
-final class SharedData {
+final class FrameInputData {
 
-    private SharedData() {
+    private FrameInputData() {
     }
 
     static Path file(String relative) {
