@@ -106,42 +106,29 @@ final class FrameScorer {
         }
     }
 
-    /** Adds the skipped words' exact terms to the kept frames and sorts them best first. */
+    /** Adds the skipped words' exact terms to the kept frames and returns them best first. */
     private RankedFrames finish(WordVector query, int skipped, double skippedWeight, InvertedIndex index,
                                 FrameTable frames, float[] idf) {
         int n = top.size();
         int[] slots = new int[n];
         double[] scores = new double[n];
+        top.drainBestFirst(slots, scores);
+        if (skipped == 0) {
+            return new RankedFrames(slots, scores, 0);
+        }
         for (int i = 0; i < n; i++) {
-            slots[i] = top.slot(i);
-            double score = top.score(i);
             for (int k = 0; k < skipped; k++) {
                 int w = query.words()[skippedWords[k]];
                 int count = index.countIn(w, slots[i]);
                 if (count > 0) {
                     float stored = WordVector.weight(count, idf[w], frames.inverseNorm(slots[i]));
-                    score += query.norm().term(query.weights()[skippedWords[k]], stored);
+                    scores[i] += query.norm().term(query.weights()[skippedWords[k]], stored);
                 }
             }
-            scores[i] = score;
+            top.offer(slots[i], scores[i]);
         }
-        sortBestFirst(slots, scores);
+        top.drainBestFirst(slots, scores);
         return new RankedFrames(slots, scores, skippedWeight);
-    }
-
-    private static void sortBestFirst(int[] slots, double[] scores) {
-        for (int i = 1; i < slots.length; i++) {
-            int slot = slots[i];
-            double score = scores[i];
-            int j = i - 1;
-            while (j >= 0 && (scores[j] < score || (scores[j] == score && slots[j] > slot))) {
-                slots[j + 1] = slots[j];
-                scores[j + 1] = scores[j];
-                j--;
-            }
-            slots[j + 1] = slot;
-            scores[j + 1] = score;
-        }
     }
 
     private void reserve(int slotCount, int queryWords) {

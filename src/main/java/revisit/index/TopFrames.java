@@ -50,6 +50,23 @@ final class TopFrames {
         return scores[i];
     }
 
+    /**
+     * Empties the heap into {@code outSlots} / {@code outScores} best first (sorted by the same order), in
+     * O(n log n).
+     */
+    void drainBestFirst(int[] outSlots, double[] outScores) {
+        for (int i = size - 1; i >= 0; i--) {
+            outSlots[i] = slots[0];
+            outScores[i] = scores[0];
+            size--;
+            if (size > 0) {
+                slots[0] = slots[size];
+                scores[0] = scores[size];
+                siftDown(0);
+            }
+        }
+    }
+
     private static boolean worse(int slotA, double scoreA, int slotB, double scoreB) {
         return scoreA < scoreB || (scoreA == scoreB && slotA > slotB);
     }

@@ -88,20 +88,20 @@ class DatabaseFileTest {
 
     @Test
     void everyCorruptedOrTruncatedFileGivesOneLineBadInput() throws IOException {
-        RevisitDatabase db = build(6, 12, new ArrayList<>());
+        RevisitDatabase db = build(6, 10, new ArrayList<>());
         Path good = dir.resolve("small.rvdb");
         db.save(good);
         byte[] bytes = Files.readAllBytes(good);
-        Path bad = dir.resolve("bad.rvdb");
         for (int i = 0; i < bytes.length; i++) {
             byte[] flipped = bytes.clone();
             flipped[i] ^= (byte) (1 << (i % 8));
-            expectBadInput(bad, flipped, "flip at byte " + i);
+            expectBadInput(dir.resolve("flip" + i + ".rvdb"), flipped, "flip at byte " + i);
         }
         for (int length = 0; length < bytes.length; length++) {
-            expectBadInput(bad, Arrays.copyOf(bytes, length), "truncated to " + length);
+            expectBadInput(dir.resolve("cut" + length + ".rvdb"), Arrays.copyOf(bytes, length),
+                    "truncated to " + length);
         }
-        expectBadInput(bad, Arrays.copyOf(bytes, bytes.length + 1), "one byte appended");
+        expectBadInput(dir.resolve("long.rvdb"), Arrays.copyOf(bytes, bytes.length + 1), "one byte appended");
     }
 
     private static void expectBadInput(Path file, byte[] content, String what) throws IOException {
