@@ -2,7 +2,9 @@ package revisit.index;
 
 /**
  * Scores every frame sharing a word with the query in one pass over the query words' posting lists, and keeps the
- * best. Scratch buffers (a float per slot and a list of touched slots) are reused between queries, so one scorer
+ * best. Words whose lists are longer than {@link #stopListLimit} are stop words for the query and are left out of
+ * every score (Sivic and Zisserman, ICCV 2003); their ids are returned so the caller can leave them out of the
+ * normaliser too. Scratch buffers (a float per slot and a list of touched slots) are reused between queries, so one scorer
  * serves one thread.
  *
  * <p>Per shared word the score gains {@link ScoreNorm#term}: {@code min(q_w, d_w)} for L1, {@code q_w d_w} for L2
@@ -19,8 +21,7 @@ final class FrameScorer {
     RankedFrames rank(WordVector query, FrameWords queryFrame, InvertedIndex index, FrameTable frames,
                       WordWeights weights, IndexConfig config) {
         reserve(frames.slotCount(), query.size());
-        long limit = config.maxWordFrameFraction() >= 1 ? Long.MAX_VALUE
-                : (long) Math.floor(config.maxWordFrameFraction() * frames.liveCount());
+        long limit = stopListLimit(config, frames.liveCount());
         int touchedCount = 0;
         int skipped = 0;
         double skippedWeight = 0;
@@ -43,7 +44,15 @@ final class FrameScorer {
             }
         }
         harvest(touchedCount, query.norm(), queryFrame, frames, config);
-        return finish(query, skipped, skippedWeight, index, frames, idf);
+        return finish(skipped, skippedWeight, query);
+    }
+
+    /** Longest posting list walked: lists above it belong to stop words for this query. */
+    static long stopListLimit(IndexConfig config, int liveFrames) {
+        if (config.maxWordFrameFraction() >= 1) {
+            return Long.MAX_VALUE;
+        }
+        return Math.max(config.stopListMinFrames(), (long) Math.floor(config.maxWordFrameFraction() * liveFrames));
     }
 
     private int walkL1(InvertedIndex index, int w, float qw, float idfW, float[] inverseNorms, int touchedCount) {
@@ -106,29 +115,16 @@ final class FrameScorer {
         }
     }
 
-    /** Adds the skipped words' exact terms to the kept frames and returns them best first. */
-    private RankedFrames finish(WordVector query, int skipped, double skippedWeight, InvertedIndex index,
-                                FrameTable frames, float[] idf) {
+    private RankedFrames finish(int skipped, double skippedWeight, WordVector query) {
         int n = top.size();
         int[] slots = new int[n];
         double[] scores = new double[n];
         top.drainBestFirst(slots, scores);
-        if (skipped == 0) {
-            return new RankedFrames(slots, scores, 0);
+        int[] stopWords = new int[skipped];
+        for (int k = 0; k < skipped; k++) {
+            stopWords[k] = query.words()[skippedWords[k]];
         }
-        for (int i = 0; i < n; i++) {
-            for (int k = 0; k < skipped; k++) {
-                int w = query.words()[skippedWords[k]];
-                int count = index.countIn(w, slots[i]);
-                if (count > 0) {
-                    float stored = WordVector.weight(count, idf[w], frames.inverseNorm(slots[i]));
-                    scores[i] += query.norm().term(query.weights()[skippedWords[k]], stored);
-                }
-            }
-            top.offer(slots[i], scores[i]);
-        }
-        top.drainBestFirst(slots, scores);
-        return new RankedFrames(slots, scores, skippedWeight);
+        return new RankedFrames(slots, scores, stopWords, skippedWeight);
     }
 
     private void reserve(int slotCount, int queryWords) {

@@ -25,16 +25,20 @@ package revisit.index;
  * @param consistencyGapSeconds two chosen groups "lie near" when their time spans overlap or are at most this far
  *                              apart, seconds, typically 1-10; default 2 s, common practice
  * @param maxCandidates         candidates returned per query, best first, 1-1000; default 50, common practice
- * @param maxWordFrameFraction  posting lists of words found in more than this fraction of the database's frames are
- *                              not walked; the best candidates are then rescored exactly over those words, so their
- *                              scores stay exact and only the choice of candidates is affected (a stop list, Sivic and
- *                              Zisserman, "Video Google", ICCV 2003). In (0, 1]; 1 walks every list. Default 1: see
- *                              docs/INDEX.md for the measured effect of lower values
+ * @param maxWordFrameFraction  stop list (Sivic and Zisserman, "Video Google", ICCV 2003): a query word whose
+ *                              posting list holds more than this fraction of the database's frames (and more than
+ *                              {@code stopListMinFrames}) is a stop word for that query, left out of its raw scores
+ *                              and of its normaliser alike. In (0, 1]; 1 = no stop list, exact scores. Default 0.1,
+ *                              measured here: walking every list costs ~10 ms per query at 100k frames, see
+ *                              docs/INDEX.md for speed and the effect on ranking
+ * @param stopListMinFrames     posting lists this long or shorter are always walked, frames, 0 to 10^6; default
+ *                              2000 (walking 2000 postings costs a few microseconds), so small databases are scored
+ *                              exactly
  */
 public record IndexConfig(ScoreNorm scoreNorm, QueryScope scope, double exclusionSeconds, int exclusionFrames,
                           double minPredecessorScore, double minNormalisedScore, double groupGapSeconds,
                           int consistencyQueries, double consistencyGapSeconds, int maxCandidates,
-                          double maxWordFrameFraction) {
+                          double maxWordFrameFraction, int stopListMinFrames) {
 
     public IndexConfig {
         if (scoreNorm == null || scope == null) {
@@ -55,6 +59,7 @@ public record IndexConfig(ScoreNorm scoreNorm, QueryScope scope, double exclusio
             throw new IllegalArgumentException("maxWordFrameFraction must be in (0, 1], was " + maxWordFrameFraction
                     + "; use 1 to walk every posting list");
         }
+        requireRange("stopListMinFrames", stopListMinFrames, 0, 1_000_000);
     }
 
     private static void requireRange(String name, double value, double min, double max) {
@@ -65,72 +70,79 @@ public record IndexConfig(ScoreNorm scoreNorm, QueryScope scope, double exclusio
 
     /** The defaults documented on each field. */
     public static IndexConfig defaults() {
-        return new IndexConfig(ScoreNorm.L1, QueryScope.ALL_SEQUENCES, 20.0, 0, 0.01, 0.3, 2.0, 3, 2.0, 50, 1.0);
+        return new IndexConfig(ScoreNorm.L1, QueryScope.ALL_SEQUENCES, 20.0, 0, 0.01, 0.3, 2.0, 3, 2.0, 50, 0.1,
+                2000);
     }
 
     public IndexConfig withScoreNorm(ScoreNorm value) {
         return new IndexConfig(value, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
                 minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+                maxWordFrameFraction, stopListMinFrames);
     }
 
     public IndexConfig withScope(QueryScope value) {
         return new IndexConfig(scoreNorm, value, exclusionSeconds, exclusionFrames, minPredecessorScore,
                 minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+                maxWordFrameFraction, stopListMinFrames);
     }
 
     public IndexConfig withExclusionSeconds(double value) {
-        return new IndexConfig(scoreNorm, scope, value, exclusionFrames, minPredecessorScore,
-                minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+        return new IndexConfig(scoreNorm, scope, value, exclusionFrames, minPredecessorScore, minNormalisedScore,
+                groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates, maxWordFrameFraction,
+                stopListMinFrames);
     }
 
     public IndexConfig withExclusionFrames(int value) {
-        return new IndexConfig(scoreNorm, scope, exclusionSeconds, value, minPredecessorScore,
-                minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+        return new IndexConfig(scoreNorm, scope, exclusionSeconds, value, minPredecessorScore, minNormalisedScore,
+                groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates, maxWordFrameFraction,
+                stopListMinFrames);
     }
 
     public IndexConfig withMinPredecessorScore(double value) {
-        return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, value,
-                minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+        return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, value, minNormalisedScore,
+                groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates, maxWordFrameFraction,
+                stopListMinFrames);
     }
 
     public IndexConfig withMinNormalisedScore(double value) {
-        return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
-                value, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+        return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore, value,
+                groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates, maxWordFrameFraction,
+                stopListMinFrames);
     }
 
     public IndexConfig withGroupGapSeconds(double value) {
         return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
                 minNormalisedScore, value, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+                maxWordFrameFraction, stopListMinFrames);
     }
 
     public IndexConfig withConsistencyQueries(int value) {
         return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
                 minNormalisedScore, groupGapSeconds, value, consistencyGapSeconds, maxCandidates,
-                maxWordFrameFraction);
+                maxWordFrameFraction, stopListMinFrames);
     }
 
     public IndexConfig withConsistencyGapSeconds(double value) {
         return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
-                minNormalisedScore, groupGapSeconds, consistencyQueries, value, maxCandidates,
-                maxWordFrameFraction);
+                minNormalisedScore, groupGapSeconds, consistencyQueries, value, maxCandidates, maxWordFrameFraction,
+                stopListMinFrames);
     }
 
     public IndexConfig withMaxCandidates(int value) {
         return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
                 minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, value,
-                maxWordFrameFraction);
+                maxWordFrameFraction, stopListMinFrames);
     }
 
     public IndexConfig withMaxWordFrameFraction(double value) {
         return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
+                minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates, value,
+                stopListMinFrames);
+    }
+
+    public IndexConfig withStopListMinFrames(int value) {
+        return new IndexConfig(scoreNorm, scope, exclusionSeconds, exclusionFrames, minPredecessorScore,
                 minNormalisedScore, groupGapSeconds, consistencyQueries, consistencyGapSeconds, maxCandidates,
-                value);
+                maxWordFrameFraction, value);
     }
 }

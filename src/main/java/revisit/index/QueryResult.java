@@ -14,12 +14,12 @@ import java.util.OptionalDouble;
  * @param predecessorScore {@code s(q, q_prev)} against the previous query of the same sequence, empty for the first
  * @param normaliser       denominator used for the normalised scores: predecessor score, floored at
  *                         {@link IndexConfig#minPredecessorScore()}
- * @param skippedWeight    query weight on words whose posting lists were skipped (stop list); a frame not listed
- *                         may have been ranked this much too low at most; 0 when every list was walked
+ * @param stopWordWeight   the query's weight on its stop words (see {@link IndexConfig#maxWordFrameFraction()}),
+ *                         which no score of this query includes; 0 when every posting list was walked
  * @param consistency      temporal consistency state with its reason
  */
 public record QueryResult(List<Candidate> candidates, List<MatchGroup> groups, OptionalDouble predecessorScore,
-                          double normaliser, double skippedWeight, Consistency consistency) {
+                          double normaliser, double stopWordWeight, Consistency consistency) {
 
     public QueryResult {
         candidates = List.copyOf(candidates);

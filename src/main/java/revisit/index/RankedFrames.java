@@ -4,11 +4,11 @@ package revisit.index;
  * Best frames of one query by raw score, best first (ties: earlier slot first).
  *
  * @param slots         frame slots
- * @param scores        exact raw score of each, in (0, 1]
- * @param skippedWeight total query weight on words whose posting lists were not walked (stop list); a frame not
- *                      listed may have been ranked this much too low at most. 0 when every list was walked
+ * @param scores        raw score of each over the query's words other than its stop words, in (0, 1]
+ * @param stopWords     the query's stop words (lists not walked), increasing ids; empty when every list was walked
+ * @param skippedWeight total query weight on the stop words
  */
-record RankedFrames(int[] slots, double[] scores, double skippedWeight) {
+record RankedFrames(int[] slots, double[] scores, int[] stopWords, double skippedWeight) {
 
     int size() {
         return slots.length;

@@ -9,9 +9,10 @@ import java.util.OptionalDouble;
  * Queries a {@link RevisitDatabase} with the frames of one stream, in order, and keeps what the queries of that
  * stream share: the previous query's vector (the normaliser) and the chain of chosen groups (temporal consistency).
  *
- * <p>Per query: rank frames by raw score {@code s(q, c)} outside the exclusion window; normalise by
+ * <p>Per query: rank frames by raw score {@code s(q, c)} outside the exclusion window (leaving out the query's stop
+ * words, see {@link IndexConfig#maxWordFrameFraction()}); normalise by
  * {@code eta = s(q, c) / max(s(q, q_prev), floor)} where {@code q_prev} is the previous query of the same sequence
- * (Gálvez-López and Tardós, IEEE T-RO 2012); group candidates with {@code eta >= minNormalisedScore} that are
+ * (Gálvez-López and Tardós, IEEE T-RO 2012), scored over the same words; group candidates with {@code eta >= minNormalisedScore} that are
  * neighbours in time ({@link MatchGrouping}); choose the best group; check it against the groups chosen before
  * ({@link TemporalConsistency}). To merge sessions, query one sequence's frames against a database holding another
  * (set {@link QueryScope#OTHER_SEQUENCES} when the database also holds the query's own sequence).
@@ -73,7 +74,7 @@ public final class RevisitSearch {
         }
         RankedFrames ranked = database.rank(vector, frame, config);
         OptionalDouble predecessor = previous == null ? OptionalDouble.empty()
-                : OptionalDouble.of(vector.similarity(previous));
+                : OptionalDouble.of(vector.similarity(previous, ranked.stopWords()));
         double normaliser = Math.max(predecessor.orElse(0), config.minPredecessorScore());
         List<Candidate> candidates = new ArrayList<>(ranked.size());
         List<Candidate> strong = new ArrayList<>();

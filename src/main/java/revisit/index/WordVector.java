@@ -90,6 +90,16 @@ public record WordVector(int[] words, int[] counts, float[] weights, float inver
      * @param other vector normalised the same way
      */
     public double similarity(WordVector other) {
+        return similarity(other, new int[0]);
+    }
+
+    /**
+     * Score over the shared words other than {@code excludedWords} (stop words).
+     *
+     * @param other         vector normalised the same way
+     * @param excludedWords word ids left out, increasing
+     */
+    double similarity(WordVector other, int[] excludedWords) {
         if (other.norm != norm) {
             throw new IllegalArgumentException("cannot compare an " + norm + " vector with an " + other.norm
                     + " vector");
@@ -97,11 +107,19 @@ public record WordVector(int[] words, int[] counts, float[] weights, float inver
         double s = 0;
         int i = 0;
         int j = 0;
+        int x = 0;
         while (i < words.length && j < other.words.length) {
             int a = words[i];
             int b = other.words[j];
             if (a == b) {
-                s += norm.term(weights[i++], other.weights[j++]);
+                while (x < excludedWords.length && excludedWords[x] < a) {
+                    x++;
+                }
+                if (x >= excludedWords.length || excludedWords[x] != a) {
+                    s += norm.term(weights[i], other.weights[j]);
+                }
+                i++;
+                j++;
             } else if (a < b) {
                 i++;
             } else {
