@@ -25,7 +25,8 @@ import revisit.index.WordVector;
  * keep their word), half are new places. The query vector is built beforehand, as a scan builds it once for query
  * and add.
  *
- * <p>Run: {@code mvn -B -Pbench -DskipTests package && java -jar target/benchmarks.jar IndexQueryBenchmark}
+ * <p>Run: {@code mvn -B -Pbench -DskipTests package && java -jar target/benchmarks.jar IndexQueryBenchmark}; a
+ * fixed cap of 2000 postings per walked list instead of a fraction: add {@code -p maxWordFrameFraction=0.000001}.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SampleTime)
@@ -44,6 +45,9 @@ public class IndexQueryBenchmark {
     @Param({"1.0", "0.1"})
     public double maxWordFrameFraction;
 
+    @Param({"2000"})
+    public int stopListMinFrames;
+
     private static final int QUERIES = 512;
     private RevisitSearch search;
     private FrameWords[] queries;
@@ -53,7 +57,8 @@ public class IndexQueryBenchmark {
     @Setup
     public void build() {
         SyntheticScan scan = new SyntheticScan(vocabulary, 1.0, 500, 1000, 42L);
-        IndexConfig config = IndexConfig.defaults().withMaxWordFrameFraction(maxWordFrameFraction);
+        IndexConfig config = IndexConfig.defaults().withMaxWordFrameFraction(maxWordFrameFraction)
+                .withStopListMinFrames(stopListMinFrames);
         RevisitDatabase database = new RevisitDatabase(scan.weights(), config);
         int[][] kept = new int[QUERIES / 2][];
         for (int i = 0; i < frames; i++) {

@@ -52,8 +52,16 @@ public final class RevisitSearch {
         return query(frame, database.vectorOf(frame.words()));
     }
 
-    /** Queries and then adds the frame, building its vector once. */
+    /**
+     * Queries and then adds the frame, building its vector once.
+     *
+     * @param frame a frame not yet in the database
+     */
     public QueryResult addAndQuery(FrameWords frame) {
+        if (database.contains(frame.sequenceId(), frame.frameId())) {
+            throw new IllegalArgumentException("frame " + frame.frameId() + " of sequence " + frame.sequenceId()
+                    + " is already in the database; query it with query(..) instead");
+        }
         WordVector vector = database.vectorOf(frame.words());
         QueryResult result = query(frame, vector);
         database.add(frame, vector);
