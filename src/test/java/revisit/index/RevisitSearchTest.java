@@ -3,6 +3,7 @@ package revisit.index;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -154,5 +155,34 @@ class RevisitSearchTest {
         QueryResult result = search.query(TestFrames.frame(0, 99, 99, words[25]));
         assertTrue(result.candidates().stream().noneMatch(c -> c.frameId() < 20));
         assertEquals(25, result.candidates().get(0).frameId());
+    }
+
+    @Test
+    void floorsTheNormaliserWhenThePredecessorIsUnrelated() {
+        IndexConfig config = IndexConfig.defaults().withExclusionSeconds(0).withMinPredecessorScore(0.05);
+        RevisitDatabase db = database(config);
+        db.add(TestFrames.frame(0, 0, 0.0, TestFrames.windowWords(new Random(1L), 100, 0, 100)));
+        RevisitSearch search = new RevisitSearch(db);
+        search.query(TestFrames.frame(0, 1, 1.0, TestFrames.windowWords(new Random(2L), 100, 1000, 100)));
+        QueryResult result = search.query(TestFrames.frame(0, 2, 2.0,
+                TestFrames.windowWords(new Random(3L), 100, 0, 100)));
+        assertEquals(0.0, result.predecessorScore().getAsDouble());
+        assertEquals(0.05, result.normaliser());
+        assertEquals(ConsistencyState.WEAK_PREDECESSOR, result.consistency().state());
+        Candidate c = result.candidates().get(0);
+        assertEquals(c.rawScore() / 0.05, c.normalisedScore(), 1e-12);
+    }
+
+    @Test
+    void refusesDuplicateFramesAndMismatchedFeatureArrays() {
+        RevisitDatabase db = database(IndexConfig.defaults());
+        FrameWords frame = TestFrames.frame(0, 1, 0.0, new int[]{1, 2, 3});
+        db.add(frame);
+        assertThrows(IllegalArgumentException.class, () -> db.add(frame));
+        assertThrows(IllegalArgumentException.class, () -> new RevisitSearch(db).addAndQuery(frame));
+        assertThrows(IllegalArgumentException.class,
+                () -> new FrameWords(0, 2, 0.0, new int[]{1, 2}, new int[]{1}));
+        assertThrows(IllegalArgumentException.class, () -> db.add(TestFrames.frame(0, 3, 0.0, new int[]{WORDS})));
+        assertEquals(1, db.size());
     }
 }
