@@ -11,8 +11,8 @@ import revisit.index.WordWeights;
  * database's own count of its index structures, and the retained size JOL measures by walking the object graph
  * (vocabulary weight table excluded, it belongs to the vocabulary). Prints a Markdown table.
  *
- * <p>Run: {@code mvn -B -Pbench -DskipTests package && java -Xmx3g -Djol.magicFieldOffset=true -cp target/benchmarks.jar
- * revisit.bench.IndexMemoryReport}
+ * <p>Run: {@code mvn -B -Pbench -DskipTests package && java -Xmx3g -Djol.magicFieldOffset=true
+ * -cp target/benchmarks.jar revisit.bench.IndexMemoryReport}
  */
 public final class IndexMemoryReport {
 

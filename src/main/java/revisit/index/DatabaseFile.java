@@ -128,8 +128,8 @@ final class DatabaseFile {
     private static void readHeader(DatabaseInput in, WordWeights weights, IndexConfig config) throws IOException {
         int magic = in.readInt("magic number");
         if (magic != MAGIC) {
-            throw in.bad(String.format(java.util.Locale.ROOT, "not a Revisit database (starts with 0x%08x, expected 0x%08x \"RVDB\"); give"
-                    + " a file written by the database's save", magic, MAGIC));
+            throw in.bad(String.format(java.util.Locale.ROOT, "not a Revisit database (starts with 0x%08x, expected "
+                    + "0x%08x \"RVDB\"); give a file written by the database's save", magic, MAGIC));
         }
         int version = in.readInt("version");
         if (version != VERSION) {

@@ -4,8 +4,8 @@ package revisit.index;
  * Scores every frame sharing a word with the query in one pass over the query words' posting lists, and keeps the
  * best. Words whose lists are longer than {@link #stopListLimit} are stop words for the query and are left out of
  * every score (Sivic and Zisserman, ICCV 2003); their ids are returned so the caller can leave them out of the
- * normaliser too. Scratch buffers (a float per slot and a list of touched slots) are reused between queries, so one scorer
- * serves one thread.
+ * normaliser too. Scratch buffers (a float per slot and a list of touched slots) are reused between queries, so
+ * one scorer serves one thread.
  *
  * <p>Per shared word the score gains {@link ScoreNorm#term}: {@code min(q_w, d_w)} for L1, {@code q_w d_w} for L2
  * (where {@code 1/Z_d} is applied once per frame at the end). A slot enters the touched list the first time its
