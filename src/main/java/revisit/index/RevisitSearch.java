@@ -14,8 +14,9 @@ import java.util.OptionalDouble;
  * {@code eta = s(q, c) / max(s(q, q_prev), floor)} where {@code q_prev} is the previous query of the same sequence
  * (Gálvez-López and Tardós, IEEE T-RO 2012), scored over the same words; group candidates with
  * {@code eta >= minNormalisedScore} that are neighbours in time ({@link MatchGrouping}); choose the best group;
- * check it against the groups chosen before ({@link TemporalConsistency}). To merge sessions, query one sequence's frames against a database holding another
- * (set {@link QueryScope#OTHER_SEQUENCES} when the database also holds the query's own sequence).
+ * check it against the groups chosen before ({@link TemporalConsistency}). To merge sessions, query one sequence's
+ * frames against a database holding another (set {@link QueryScope#OTHER_SEQUENCES} when the database also holds
+ * the query's own sequence).
  *
  * <p>The stream state is not saved with the database: after loading, the first {@code consistencyQueries} queries
  * cannot confirm a revisit. Not thread-safe.
