@@ -1,14 +1,13 @@
 package revisit.vocabulary;
 
-import java.util.Arrays;
 import revisit.features.FrameFeatures;
 
 /**
  * A trained visual vocabulary: a tree of binary descriptor centres whose leaves are the words, with an idf weight
  * per word (Nistér and Stewénius, "Scalable Recognition with a Vocabulary Tree", CVPR 2006).
  *
- * <p>The tree is stored flat: nodes numbered breadth-first from the root (0), the children of a node contiguous,
- * all centres in one {@code long[]} with {@link FrameFeatures#STRIDE} longs per node. A descriptor descends from
+ * <p>The tree is stored flat ({@link FlatTree}): nodes numbered breadth-first from the root (0), the children of a
+ * node contiguous, all centres and child links in one {@code long[]}. A descriptor descends from
  * the root, at each node to the child whose centre is nearest in Hamming distance (the lowest-numbered child on a
  * tie), until it reaches a leaf; that leaf's word is the descriptor's word. Words are numbered by a depth-first
  * walk visiting children in order, so the words below any node form a contiguous range.
@@ -21,11 +20,10 @@ public final class Vocabulary {
     private final int depth;
     private final String descriptorKind;
     private final int[] childCount;
-    private final int[] firstChild;
     private final int[] nodeWord;
     private final int[] wordNode;
     private final byte[] nodeDepth;
-    private final long[] centres;
+    private final FlatTree tree;
     private final double[] weights;
     private final int[] occupancy;
     private final Provenance provenance;
@@ -58,7 +56,6 @@ public final class Vocabulary {
         this.depth = depth;
         this.descriptorKind = descriptorKind;
         this.childCount = childCount;
-        this.firstChild = shape.firstChild();
         this.nodeWord = shape.nodeWord();
         this.wordNode = new int[shape.wordCount()];
         for (int node = 0; node < childCount.length; node++) {
@@ -67,7 +64,7 @@ public final class Vocabulary {
             }
         }
         this.nodeDepth = shape.nodeDepth();
-        this.centres = centres;
+        this.tree = new FlatTree(childCount, shape.firstChild(), nodeWord, centres);
         this.weights = weights;
         this.occupancy = occupancy;
         this.provenance = provenance;
@@ -141,16 +138,7 @@ public final class Vocabulary {
      * @return word id, 0..wordCount()-1
      */
     public int word(long[] descriptors, int featureIndex) {
-        int o = featureIndex * FrameFeatures.STRIDE;
-        long a0 = descriptors[o];
-        long a1 = descriptors[o + 1];
-        long a2 = descriptors[o + 2];
-        long a3 = descriptors[o + 3];
-        int node = 0;
-        while (childCount[node] != 0) {
-            node = nearestChild(node, a0, a1, a2, a3);
-        }
-        return nodeWord[node];
+        return tree.word(descriptors, featureIndex);
     }
 
     /**
@@ -172,49 +160,28 @@ public final class Vocabulary {
         }
         long[] d = features.descriptors();
         for (int i = 0; i < n; i++) {
-            int o = i * FrameFeatures.STRIDE;
-            int node = 0;
-            int level = 0;
-            int ancestor = 0;
-            while (childCount[node] != 0) {
-                node = nearestChild(node, d[o], d[o + 1], d[o + 2], d[o + 3]);
-                if (++level <= nodeLevel) {
-                    ancestor = node;
-                }
-            }
-            wordsOut[i] = nodeWord[node];
-            nodesOut[i] = ancestor;
+            wordsOut[i] = tree.descend(d, i, nodeLevel, nodesOut);
         }
-    }
-
-    private int nearestChild(int node, long a0, long a1, long a2, long a3) {
-        int c = firstChild[node];
-        int end = c + childCount[node];
-        int best = c;
-        int bestDistance = Integer.MAX_VALUE;
-        for (; c < end; c++) {
-            int p = c * FrameFeatures.STRIDE;
-            int d = Long.bitCount(a0 ^ centres[p]) + Long.bitCount(a1 ^ centres[p + 1])
-                    + Long.bitCount(a2 ^ centres[p + 2]) + Long.bitCount(a3 ^ centres[p + 3]);
-            if (d < bestDistance) {
-                bestDistance = d;
-                best = c;
-            }
-        }
-        return best;
     }
 
     /** Copy of the centre of {@code node} (4 longs). */
     public long[] centre(int node) {
-        return Arrays.copyOfRange(centres, node * FrameFeatures.STRIDE, (node + 1) * FrameFeatures.STRIDE);
+        long[] out = new long[FrameFeatures.STRIDE];
+        tree.centre(node, out, 0);
+        return out;
     }
 
     int[] childCounts() {
         return childCount;
     }
 
+    /** All centres, {@link FrameFeatures#STRIDE} longs per node (a new array). */
     long[] centres() {
-        return centres;
+        long[] out = new long[childCount.length * FrameFeatures.STRIDE];
+        for (int node = 0; node < childCount.length; node++) {
+            tree.centre(node, out, node);
+        }
+        return out;
     }
 
     int[] occupancies() {
