@@ -1,5 +1,6 @@
 package revisit.bench;
 
+import java.util.Arrays;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -13,6 +14,7 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
+import revisit.features.FrameFeatures;
 import revisit.vocabulary.TrainingProgress;
 import revisit.vocabulary.Vocabulary;
 import revisit.vocabulary.VocabularyConfig;
@@ -39,6 +41,10 @@ public class VocabularyLookupBenchmark {
     private Vocabulary vocabulary;
     private long[] query;
     private int offset;
+    private FrameFeatures[] frames;
+    private int nextFrame;
+    private final int[] words = new int[FRAME];
+    private final int[] nodes = new int[FRAME];
 
     @Setup
     public void train() {
@@ -48,6 +54,10 @@ public class VocabularyLookupBenchmark {
         query = "random".equals(queries)
                 ? BenchDescriptors.clustered(100_000, 100_000, 0.5, 1, 7)
                 : BenchDescriptors.clustered(100_000, 100_000, 0.1, 1, 8);
+        frames = new FrameFeatures[100];
+        for (int f = 0; f < frames.length; f++) {
+            frames[f] = frame(Arrays.copyOfRange(query, f * FRAME * 4, (f + 1) * FRAME * 4));
+        }
     }
 
     @Benchmark
@@ -60,5 +70,20 @@ public class VocabularyLookupBenchmark {
         }
         offset = (start + FRAME) % (100_000 - FRAME);
         return sum;
+    }
+
+    /** Frame lookup with the ancestor at level 3 (the words and nodes a database query needs). */
+    @Benchmark
+    @OperationsPerInvocation(FRAME)
+    public int[] frameLookupPerDescriptor() {
+        FrameFeatures frame = frames[nextFrame];
+        nextFrame = (nextFrame + 1) % frames.length;
+        vocabulary.lookup(frame, 3, words, nodes);
+        return words;
+    }
+
+    private static FrameFeatures frame(long[] descriptors) {
+        return new FrameFeatures(FRAME, new float[FRAME], new float[FRAME], new float[FRAME], new int[FRAME],
+                new float[FRAME], new float[FRAME], descriptors);
     }
 }

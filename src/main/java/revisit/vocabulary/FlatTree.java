@@ -85,12 +85,14 @@ final class FlatTree {
      */
     private int nearestChild(long link, long a0, long a1, long a2, long a3) {
         int first = (int) link;
-        int count = (int) (link >>> 32);
+        int start = first * NODE_LONGS;
+        int end = start + (int) (link >>> 32) * NODE_LONGS;
+        long[] n = nodes;
         int bestKey = Integer.MAX_VALUE;
-        for (int j = 0, p = first * NODE_LONGS; j < count; j++, p += NODE_LONGS) {
-            int dist = Long.bitCount(a0 ^ nodes[p]) + Long.bitCount(a1 ^ nodes[p + 1])
-                    + Long.bitCount(a2 ^ nodes[p + 2]) + Long.bitCount(a3 ^ nodes[p + 3]);
-            bestKey = Math.min(bestKey, (dist << 6) | j);
+        for (int p = start, rank = 0; p < end; p += NODE_LONGS, rank++) {
+            int dist = Long.bitCount(a0 ^ n[p]) + Long.bitCount(a1 ^ n[p + 1])
+                    + Long.bitCount(a2 ^ n[p + 2]) + Long.bitCount(a3 ^ n[p + 3]);
+            bestKey = Math.min(bestKey, (dist << 6) | rank);
         }
         return first + (bestKey & 63);
     }
