@@ -20,6 +20,14 @@ final class PoseRecovery {
     record Recovered(Outcome outcome, int[] inliers, Optional<RelativePose> pose, ResidualStats errors) {
     }
 
+    /**
+     * Inlier cuts, as multiples of the configured one, of the refinement rounds: least squares on a wider set
+     * first, then shrinking to the final cut, so the fit is not locked to the points the first hypothesis happened
+     * to keep (iterative least squares of Lebeda, Matas &amp; Chum, "Fixing the locally optimized RANSAC",
+     * BMVC 2012).
+     */
+    private static final double[] CUT_SCHEDULE = {2.0, 1.5, 1.25, 1.0, 1.0};
+
     private final VerificationConfig config;
     private final DecomposeEssential essentialDecomposition = new DecomposeEssential();
     private final DecomposeHomography homographyDecomposition = new DecomposeHomography();
@@ -36,15 +44,17 @@ final class PoseRecovery {
             return new Recovered(Outcome.DEGENERATE, inliers, Optional.empty(), ResidualStats.none());
         }
         double[][] pose = bestByCheirality(p, inliers, essentialDecomposition.getSolutions());
-        EpipolarPoseProblem problem = new EpipolarPoseProblem(p, inliers);
-        double[] state = LevenbergMarquardt.minimize(problem, EpipolarPoseProblem.state(pose[0], pose[1]),
-                config.refineIterations()).state();
-        double[] f = problem.fundamental(state);
-        double thresholdSq = config.inlierThresholdPx() * config.inlierThresholdPx();
-        boolean[] mask = new boolean[p.count];
-        AdaptiveRansac.classify(p.count, f, (m, i) -> SampsonDistance.squaredFundamental(m, p.xa[i], p.ya[i],
-                p.xb[i], p.yb[i]), thresholdSq, mask);
-        return finish(p, indices(mask), state, false);
+        double[] state = EpipolarPoseProblem.state(pose[0], pose[1]);
+        for (double widen : CUT_SCHEDULE) {
+            EpipolarPoseProblem problem = new EpipolarPoseProblem(p, inliers);
+            state = LevenbergMarquardt.minimize(problem, state, config.refineIterations()).state();
+            double cut = widen * config.inlierThresholdPx();
+            boolean[] mask = new boolean[p.count];
+            AdaptiveRansac.classify(p.count, problem.fundamental(state), (m, i) -> SampsonDistance
+                    .squaredFundamental(m, p.xa[i], p.ya[i], p.xb[i], p.yb[i]), cut * cut, mask);
+            inliers = indices(mask);
+        }
+        return finish(p, inliers, state, false);
     }
 
     /** From a homography fit of a planar scene (undistorted pixels). */
