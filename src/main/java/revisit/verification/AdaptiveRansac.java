@@ -109,17 +109,22 @@ final class AdaptiveRansac {
                     }
                 }
                 if (cost < bestCost) {
-                    bestCost = cost;
-                    best = m;
-                    bestInliers = inliers;
-                    needed = Math.min(needed, requiredSamples((double) inliers / size, s, config.confidence()));
+                    Fit local = refine(pool, n, m, residual, refitter, thresholdSq, it);
+                    bestCost = local.cost();
+                    best = local.model();
+                    bestInliers = local.inlierCount();
+                    needed = Math.min(needed, requiredSamples((double) bestInliers / size, s, config.confidence()));
                 }
             }
         }
         if (best == null) {
             return Optional.empty();
         }
-        return Optional.of(refine(n, best, residual, refitter, thresholdSq, it));
+        int[] all = new int[n];
+        for (int i = 0; i < n; i++) {
+            all[i] = i;
+        }
+        return Optional.of(refine(all, n, best, residual, refitter, thresholdSq, it));
     }
 
     /** Samples needed to draw one all-inlier sample of size s with probability p when the inlier ratio is w. */
@@ -134,15 +139,21 @@ final class AdaptiveRansac {
         return (long) Math.ceil(Math.log(1 - p) / Math.log(1 - allInlier));
     }
 
-    private static Fit refine(int n, double[] start, Residual residual, Refitter refitter, double thresholdSq,
-                              int iterations) {
+    /**
+     * Local optimisation (Chum, Matas &amp; Kittler, "Locally optimized RANSAC", DAGM 2003): the refitter is applied
+     * to the inliers among {@code points} while that lowers the MSAC cost over {@code points}. Called on every new
+     * best hypothesis and once at the end over all points; the returned mask covers all n points but only
+     * {@code points} are marked.
+     */
+    private static Fit refine(int[] points, int n, double[] start, Residual residual, Refitter refitter,
+                              double thresholdSq, int iterations) {
         double[] model = start;
         boolean[] inliers = new boolean[n];
-        double cost = classify(n, model, residual, thresholdSq, inliers);
-        int[] idx = new int[n];
+        double cost = classify(points, model, residual, thresholdSq, inliers);
+        int[] idx = new int[points.length];
         for (int round = 0; round < 3; round++) {
             int count = 0;
-            for (int i = 0; i < n; i++) {
+            for (int i : points) {
                 if (inliers[i]) {
                     idx[count++] = i;
                 }
@@ -152,7 +163,7 @@ final class AdaptiveRansac {
                 break;
             }
             boolean[] refitInliers = new boolean[n];
-            double refitCost = classify(n, refit.get(), residual, thresholdSq, refitInliers);
+            double refitCost = classify(points, refit.get(), residual, thresholdSq, refitInliers);
             if (!(refitCost < cost)) {
                 break;
             }
@@ -165,6 +176,17 @@ final class AdaptiveRansac {
             count += b ? 1 : 0;
         }
         return new Fit(model, inliers, count, cost, iterations);
+    }
+
+    private static double classify(int[] points, double[] model, Residual residual, double thresholdSq,
+                                   boolean[] inliers) {
+        double cost = 0;
+        for (int i : points) {
+            double e = residual.squared(model, i);
+            inliers[i] = e <= thresholdSq;
+            cost += inliers[i] ? e : thresholdSq;
+        }
+        return cost;
     }
 
     /** Marks inliers of {@code model} and returns its MSAC cost. */

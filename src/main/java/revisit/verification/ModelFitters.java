@@ -42,6 +42,21 @@ final class ModelFitters {
         });
     }
 
+    /**
+     * Seven-point fundamental samples of undistorted pixels projected to the nearest essential matrix (singular
+     * values forced to (1, 1, 0), H&amp;Z 2004 sec. 9.6.2), returned as pixel fundamental matrices.
+     */
+    AdaptiveRansac.Sampler essentialFromSeven(PointPairs p) {
+        return sampler(7, (idx, size, out) -> {
+            if (fundamentalSeven.process(gather(p.pixels, idx, size), solutions)) {
+                for (int i = 0; i < solutions.size; i++) {
+                    double[] e = p.essentialFromFundamental(solutions.get(i).data);
+                    EssentialProjection.nearest(e).ifPresent(en -> out.add(p.fundamentalFromEssential(en)));
+                }
+            }
+        });
+    }
+
     /** Seven- or eight-point fundamental samples in pixels. */
     AdaptiveRansac.Sampler fundamental(PointPairs p, VerificationConfig.FundamentalSolver solver) {
         boolean seven = solver == VerificationConfig.FundamentalSolver.SEVEN_POINT;
