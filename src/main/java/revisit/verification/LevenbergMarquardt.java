@@ -37,6 +37,11 @@ final class LevenbergMarquardt {
     }
 
     private static final double STEP = 1e-6;
+    /**
+     * Stop when a step lowers the cost by less than this fraction: 1e-6 changes pose angles by far less than the
+     * 0.01-degree noise level of a two-view fit (common practice).
+     */
+    private static final double RELATIVE_TOLERANCE = 1e-6;
 
     private LevenbergMarquardt() {
     }
@@ -72,7 +77,7 @@ final class LevenbergMarquardt {
             problem.residuals(next, trial);
             double nextCost = sumSquares(trial);
             if (nextCost < cost) {
-                boolean converged = cost - nextCost < 1e-12 * cost;
+                boolean converged = cost - nextCost < RELATIVE_TOLERANCE * cost;
                 state = next;
                 cost = nextCost;
                 System.arraycopy(trial, 0, r, 0, m);

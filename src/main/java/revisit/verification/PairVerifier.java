@@ -61,17 +61,18 @@ public final class PairVerifier {
                 : AdaptiveRansac.run(n, fitters.fundamental(p, config.fundamentalSolver()), epipolarError,
                 fitters.fundamentalRefit(p), tF, config);
         Optional<AdaptiveRansac.Fit> homography = fitHomography(p, epipolar, homographyError, tH);
-        Optional<RotationFit> rotation = p.calibrated() ? homography.flatMap(h -> RotationFit.of(p, h, config))
-                : Optional.empty();
-        int iterations = epipolar.map(AdaptiveRansac.Fit::iterations).orElse(0)
-                + homography.map(AdaptiveRansac.Fit::iterations).orElse(0);
         double sigma = config.noiseSigmaPx();
         ModelSelection.Candidate epipolarKind = p.calibrated() ? ModelSelection.Candidate.ESSENTIAL
                 : ModelSelection.Candidate.FUNDAMENTAL;
-        ModelScores scores = new ModelScores(
-                epipolar.map(f -> gric(epipolarKind, f.model(), epipolarError, n, sigma)).orElse(Double.NaN),
-                homography.map(h -> gric(ModelSelection.Candidate.HOMOGRAPHY, h.model(), homographyError, n, sigma))
-                        .orElse(Double.NaN),
+        double epipolarGric = epipolar.map(f -> gric(epipolarKind, f.model(), epipolarError, n, sigma))
+                .orElse(Double.NaN);
+        double homographyGric = homography.map(h -> gric(ModelSelection.Candidate.HOMOGRAPHY, h.model(),
+                homographyError, n, sigma)).orElse(Double.NaN);
+        Optional<RotationFit> rotation = p.calibrated() && rotationCanWin(epipolarGric, homographyGric, n)
+                ? homography.flatMap(h -> RotationFit.of(p, h, config)) : Optional.empty();
+        int iterations = epipolar.map(AdaptiveRansac.Fit::iterations).orElse(0)
+                + homography.map(AdaptiveRansac.Fit::iterations).orElse(0);
+        ModelScores scores = new ModelScores(epipolarGric, homographyGric,
                 rotation.map(RotationFit::gric).orElse(Double.NaN));
         ModelKind kind = choose(scores, p.calibrated());
         return switch (kind) {
@@ -105,6 +106,18 @@ public final class PairVerifier {
         int cap = (int) Math.min(config.maxIterations(), needed);
         return AdaptiveRansac.run(p.count, pool, cap, fitters.homography(p), error, fitters.homographyRefit(p),
                 thresholdSq, config);
+    }
+
+    /**
+     * A rotation is a homography {@code K R K^-1}, so its residuals are no smaller than the best homography's and
+     * its GRIC is at least the homography's less the parameter saving {@code (8 - 3) ln(4 n)}; when even that
+     * loses to the epipolar model, the rotation fit is skipped.
+     */
+    static boolean rotationCanWin(double epipolarGric, double homographyGric, int n) {
+        if (Double.isNaN(homographyGric)) {
+            return false;
+        }
+        return Double.isNaN(epipolarGric) || homographyGric - 5 * Math.log(4.0 * n) < epipolarGric;
     }
 
     /** The candidate with the lowest GRIC; NONE when nothing was fitted. */
