@@ -27,9 +27,9 @@ final class AdaptiveRansac {
         double squared(double[] model, int i);
     }
 
-    /** A model fitted to all inliers, or empty. */
+    /** A model fitted to all inliers, starting from the current model, or empty. */
     interface Refitter {
-        Optional<double[]> fit(int[] indices, int size);
+        Optional<double[]> fit(double[] current, int[] indices, int size);
     }
 
     /**
@@ -158,7 +158,7 @@ final class AdaptiveRansac {
                     idx[count++] = i;
                 }
             }
-            Optional<double[]> refit = refitter.fit(idx, count);
+            Optional<double[]> refit = refitter.fit(model, idx, count);
             if (refit.isEmpty()) {
                 break;
             }

@@ -42,21 +42,6 @@ final class ModelFitters {
         });
     }
 
-    /**
-     * Seven-point fundamental samples of undistorted pixels projected to the nearest essential matrix (singular
-     * values forced to (1, 1, 0), H&amp;Z 2004 sec. 9.6.2), returned as pixel fundamental matrices.
-     */
-    AdaptiveRansac.Sampler essentialFromSeven(PointPairs p) {
-        return sampler(7, (idx, size, out) -> {
-            if (fundamentalSeven.process(gather(p.pixels, idx, size), solutions)) {
-                for (int i = 0; i < solutions.size; i++) {
-                    double[] e = p.essentialFromFundamental(solutions.get(i).data);
-                    EssentialProjection.nearest(e).ifPresent(en -> out.add(p.fundamentalFromEssential(en)));
-                }
-            }
-        });
-    }
-
     /** Seven- or eight-point fundamental samples in pixels. */
     AdaptiveRansac.Sampler fundamental(PointPairs p, VerificationConfig.FundamentalSolver solver) {
         boolean seven = solver == VerificationConfig.FundamentalSolver.SEVEN_POINT;
@@ -72,25 +57,29 @@ final class ModelFitters {
 
     /** Four-point homography samples in pixels (normalised DLT, H&amp;Z algorithm 4.2). */
     AdaptiveRansac.Sampler homography(PointPairs p) {
-        return sampler(4, (idx, size, out) -> homographyRefit(p).fit(idx, size).ifPresent(out::add));
+        return sampler(4, (idx, size, out) -> dlt(p, idx, size).ifPresent(out::add));
     }
 
     /** Linear eight-point essential matrix on all inliers (singular values forced equal), in pixels. */
     AdaptiveRansac.Refitter essentialRefit(PointPairs p) {
-        return (idx, size) -> size >= 8 && essentialLinear.process(gather(p.normalized, idx, size), single)
+        return (current, idx, size) -> size >= 8 && essentialLinear.process(gather(p.normalized, idx, size), single)
                 ? Optional.of(p.fundamentalFromEssential(single.data.clone())) : Optional.empty();
     }
 
     /** Normalised eight-point fundamental matrix on all inliers (Hartley, IEEE PAMI 1997). */
     AdaptiveRansac.Refitter fundamentalRefit(PointPairs p) {
-        return (idx, size) -> size >= 8 && fundamentalLinear.process(gather(p.pixels, idx, size), single)
+        return (current, idx, size) -> size >= 8 && fundamentalLinear.process(gather(p.pixels, idx, size), single)
                 ? Optional.of(single.data.clone()) : Optional.empty();
     }
 
     /** Normalised DLT homography on all given points. */
     AdaptiveRansac.Refitter homographyRefit(PointPairs p) {
-        return (idx, size) -> size >= 4 && homographyLinear.process(gather(p.pixels, idx, size), single)
-                && isFinite(single.data) ? Optional.of(single.data.clone()) : Optional.empty();
+        return (current, idx, size) -> dlt(p, idx, size);
+    }
+
+    private Optional<double[]> dlt(PointPairs p, int[] idx, int size) {
+        return size >= 4 && homographyLinear.process(gather(p.pixels, idx, size), single) && isFinite(single.data)
+                ? Optional.of(single.data.clone()) : Optional.empty();
     }
 
     private List<AssociatedPair> gather(List<AssociatedPair> all, int[] idx, int size) {

@@ -83,8 +83,9 @@ final class PoseRecovery {
     }
 
     /** Drops inliers behind a camera, refits on the rest and builds the pose with its information. */
-    private Recovered finish(PointPairs p, int[] inliers, double[] state, boolean ambiguous) {
+    private Recovered finish(PointPairs p, int[] inliers, double[] refined, boolean ambiguous) {
         double minSin = Cheirality.minSinParallax(p, config);
+        double[] state = resolveCheirality(p, inliers, refined);
         double[] r = EpipolarPoseProblem.rotation(state);
         double[] t = EpipolarPoseProblem.translation(state);
         int kept = 0;
@@ -108,6 +109,20 @@ final class PoseRecovery {
         RelativePose pose = new RelativePose(rotation, Optional.of(direction), Optional.empty(), info, ambiguous);
         return new Recovered(Outcome.ACCEPTED, front, Optional.of(pose),
                 ResidualStats.of(sol.residuals(), sol.residuals().length));
+    }
+
+    /**
+     * The Sampson cost cannot tell the four poses of one essential matrix apart (t and -t, and the twisted pair),
+     * so on a flat cost valley the refinement may drift to one that puts the points behind the cameras. The
+     * refined E is therefore decomposed again and the pose chosen by cheirality once more.
+     */
+    private double[] resolveCheirality(PointPairs p, int[] inliers, double[] state) {
+        double[] e = Mat3.mul(Mat3.skew(EpipolarPoseProblem.translation(state)), EpipolarPoseProblem.rotation(state));
+        if (!essentialDecomposition.decompose(DMatrixRMaj.wrap(3, 3, e))) {
+            return state;
+        }
+        double[][] pose = bestByCheirality(p, inliers, essentialDecomposition.getSolutions());
+        return EpipolarPoseProblem.state(pose[0], pose[1]);
     }
 
     /** The pose (R, t) of the decomposition with the largest front-minus-behind count. */
