@@ -1,0 +1,202 @@
+package revisit.verification;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.SplittableRandom;
+
+/**
+ * RANSAC (Fischler &amp; Bolles, CACM 1981) with MSAC scoring (Torr &amp; Zisserman, CVIU 2000: each point costs
+ * {@code min(e^2, t^2)}), the adaptive sample count {@code N = log(1 - p) / log(1 - w^s)} updated from the best
+ * inlier ratio w so far (Hartley &amp; Zisserman 2004, sec. 4.7.1, algorithm 4.5), and a final linear refit on
+ * all inliers repeated while it lowers the cost. Each call starts a fresh generator from the given seed, so the
+ * same input and seed give the same result.
+ */
+final class AdaptiveRansac {
+
+    /** Fits the models that pass through a minimal sample. */
+    interface Sampler {
+        int sampleSize();
+
+        /** Adds to {@code out} every model (row-major 3x3) that fits the first {@code size} indices. */
+        void fit(int[] indices, int size, List<double[]> out);
+    }
+
+    /** Squared error of point {@code i} under {@code model}, pixels squared. */
+    interface Residual {
+        double squared(double[] model, int i);
+    }
+
+    /** A model fitted to all inliers, starting from the current model, or empty. */
+    interface Refitter {
+        Optional<double[]> fit(double[] current, int[] indices, int size);
+    }
+
+    /**
+     * Best model found.
+     *
+     * @param model       row-major 3x3
+     * @param inliers     per point, true when its squared error is within the cut
+     * @param inlierCount number of true entries of {@code inliers}
+     * @param cost        MSAC cost, pixels squared
+     * @param iterations  samples drawn
+     */
+    record Fit(double[] model, boolean[] inliers, int inlierCount, double cost, int iterations) {
+    }
+
+    private AdaptiveRansac() {
+    }
+
+    /**
+     * Runs RANSAC over all {@code n} points.
+     *
+     * @param thresholdSq inlier cut on the squared error, pixels squared
+     * @return the best model, or empty when no sample produced one
+     */
+    static Optional<Fit> run(int n, Sampler sampler, Residual residual, Refitter refitter, double thresholdSq,
+                             VerificationConfig config) {
+        int[] all = new int[n];
+        for (int i = 0; i < n; i++) {
+            all[i] = i;
+        }
+        return run(n, all, config.maxIterations(), sampler, residual, refitter, thresholdSq, config);
+    }
+
+    /**
+     * Runs RANSAC with samples drawn from, and hypotheses scored on, the points in {@code pool}; the final refit
+     * and the returned inliers cover all {@code n} points.
+     *
+     * @param pool          indices of the points to sample from and score on (not modified)
+     * @param maxIterations cap on samples for this call
+     * @param thresholdSq   inlier cut on the squared error, pixels squared
+     * @return the best model, or empty when no sample produced one
+     */
+    static Optional<Fit> run(int n, int[] pool, int maxIterations, Sampler sampler, Residual residual,
+                             Refitter refitter, double thresholdSq, VerificationConfig config) {
+        int s = sampler.sampleSize();
+        int size = pool.length;
+        if (size < s) {
+            return Optional.empty();
+        }
+        SplittableRandom random = new SplittableRandom(config.seed());
+        int[] order = pool.clone();
+        List<double[]> models = new ArrayList<>();
+        double[] best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        int bestInliers = 0;
+        long needed = maxIterations;
+        int it = 0;
+        while (it < needed) {
+            it++;
+            for (int k = 0; k < s; k++) {
+                int pick = k + random.nextInt(size - k);
+                int tmp = order[k];
+                order[k] = order[pick];
+                order[pick] = tmp;
+            }
+            models.clear();
+            sampler.fit(order, s, models);
+            for (double[] m : models) {
+                double cost = 0;
+                int inliers = 0;
+                for (int q = 0; q < size && cost < bestCost; q++) {
+                    double e = residual.squared(m, pool[q]);
+                    if (e <= thresholdSq) {
+                        cost += e;
+                        inliers++;
+                    } else {
+                        cost += thresholdSq;
+                    }
+                }
+                if (cost < bestCost) {
+                    Fit local = refine(pool, n, m, residual, refitter, thresholdSq, it);
+                    bestCost = local.cost();
+                    best = local.model();
+                    bestInliers = local.inlierCount();
+                    needed = Math.min(needed, requiredSamples((double) bestInliers / size, s, config.confidence()));
+                }
+            }
+        }
+        if (best == null) {
+            return Optional.empty();
+        }
+        int[] all = new int[n];
+        for (int i = 0; i < n; i++) {
+            all[i] = i;
+        }
+        return Optional.of(refine(all, n, best, residual, refitter, thresholdSq, it));
+    }
+
+    /** Samples needed to draw one all-inlier sample of size s with probability p when the inlier ratio is w. */
+    static long requiredSamples(double w, int s, double p) {
+        double allInlier = Math.pow(w, s);
+        if (allInlier >= 1) {
+            return 1;
+        }
+        if (allInlier <= 0) {
+            return Long.MAX_VALUE;
+        }
+        return (long) Math.ceil(Math.log(1 - p) / Math.log(1 - allInlier));
+    }
+
+    /**
+     * Local optimisation (Chum, Matas &amp; Kittler, "Locally optimized RANSAC", DAGM 2003): the refitter is applied
+     * to the inliers among {@code points} while that lowers the MSAC cost over {@code points}. Called on every new
+     * best hypothesis and once at the end over all points; the returned mask covers all n points but only
+     * {@code points} are marked.
+     */
+    private static Fit refine(int[] points, int n, double[] start, Residual residual, Refitter refitter,
+                              double thresholdSq, int iterations) {
+        double[] model = start;
+        boolean[] inliers = new boolean[n];
+        double cost = classify(points, model, residual, thresholdSq, inliers);
+        int[] idx = new int[points.length];
+        for (int round = 0; round < 3; round++) {
+            int count = 0;
+            for (int i : points) {
+                if (inliers[i]) {
+                    idx[count++] = i;
+                }
+            }
+            Optional<double[]> refit = refitter.fit(model, idx, count);
+            if (refit.isEmpty()) {
+                break;
+            }
+            boolean[] refitInliers = new boolean[n];
+            double refitCost = classify(points, refit.get(), residual, thresholdSq, refitInliers);
+            if (!(refitCost < cost)) {
+                break;
+            }
+            model = refit.get();
+            cost = refitCost;
+            inliers = refitInliers;
+        }
+        int count = 0;
+        for (boolean b : inliers) {
+            count += b ? 1 : 0;
+        }
+        return new Fit(model, inliers, count, cost, iterations);
+    }
+
+    private static double classify(int[] points, double[] model, Residual residual, double thresholdSq,
+                                   boolean[] inliers) {
+        double cost = 0;
+        for (int i : points) {
+            double e = residual.squared(model, i);
+            inliers[i] = e <= thresholdSq;
+            cost += inliers[i] ? e : thresholdSq;
+        }
+        return cost;
+    }
+
+    /** Marks inliers of {@code model} and returns its MSAC cost. */
+    static double classify(int n, double[] model, Residual residual, double thresholdSq, boolean[] inliers) {
+        double cost = 0;
+        for (int i = 0; i < n; i++) {
+            double e = residual.squared(model, i);
+            inliers[i] = e <= thresholdSq;
+            cost += inliers[i] ? e : thresholdSq;
+        }
+        return cost;
+    }
+}

@@ -1,0 +1,163 @@
+package revisit.verification;
+
+import boofcv.alg.geo.DecomposeEssential;
+import boofcv.alg.geo.DecomposeHomography;
+import georegression.struct.point.Vector3D_F64;
+import georegression.struct.se.Se3_F64;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+import org.ejml.data.DMatrixRMaj;
+
+/**
+ * Relative pose from a calibrated model: decomposition (BoofCV), choice of the decomposition by the cheirality
+ * of the inliers, Levenberg-Marquardt refinement on the inliers, a cheirality check over all final inliers and
+ * the information matrix. Holds decomposition state: one instance per thread.
+ */
+final class PoseRecovery {
+
+    /** Pose stage result. */
+    record Recovered(Outcome outcome, int[] inliers, Optional<RelativePose> pose, ResidualStats errors) {
+    }
+
+    /**
+     * Inlier cuts, as multiples of the configured one, of the refinement rounds: least squares on a wider set
+     * first, then shrinking to the final cut, so the fit is not locked to the points the first hypothesis happened
+     * to keep (iterative least squares of Lebeda, Matas &amp; Chum, "Fixing the locally optimized RANSAC",
+     * BMVC 2012).
+     */
+    private static final double[] CUT_SCHEDULE = {2.0, 1.5, 1.25, 1.0, 1.0};
+
+    private final VerificationConfig config;
+    private final DecomposeEssential essentialDecomposition = new DecomposeEssential();
+    private final DecomposeHomography homographyDecomposition = new DecomposeHomography();
+
+    PoseRecovery(VerificationConfig config) {
+        this.config = config;
+    }
+
+    /** From an essential-matrix fit given as the pixel fundamental matrix {@code fit.model()}. */
+    Recovered fromEssential(PointPairs p, AdaptiveRansac.Fit fit) {
+        int[] inliers = indices(fit.inliers());
+        DMatrixRMaj e = DMatrixRMaj.wrap(3, 3, p.essentialFromFundamental(fit.model()));
+        if (!essentialDecomposition.decompose(e)) {
+            return new Recovered(Outcome.DEGENERATE, inliers, Optional.empty(), ResidualStats.none());
+        }
+        double[][] pose = bestByCheirality(p, inliers, essentialDecomposition.getSolutions());
+        double[] state = EpipolarPoseProblem.state(pose[0], pose[1]);
+        for (double widen : CUT_SCHEDULE) {
+            EpipolarPoseProblem problem = new EpipolarPoseProblem(p, inliers);
+            state = LevenbergMarquardt.minimize(problem, state, config.refineIterations()).state();
+            double cut = widen * config.inlierThresholdPx();
+            boolean[] mask = new boolean[p.count];
+            AdaptiveRansac.classify(p.count, problem.fundamental(state), (m, i) -> SampsonDistance
+                    .squaredFundamental(m, p.xa[i], p.ya[i], p.xb[i], p.yb[i]), cut * cut, mask);
+            inliers = indices(mask);
+        }
+        return finish(p, inliers, state, false);
+    }
+
+    /** From a homography fit of a planar scene (undistorted pixels). */
+    Recovered fromPlane(PointPairs p, AdaptiveRansac.Fit fit) {
+        int[] inliers = indices(fit.inliers());
+        double[] hn = Mat3.mul(p.kInverse, Mat3.mul(fit.model(), p.k));
+        homographyDecomposition.decompose(DMatrixRMaj.wrap(3, 3, hn));
+        List<Se3_F64> solutions = homographyDecomposition.getSolutionsSE();
+        double minSin = Cheirality.minSinParallax(p, config);
+        int[] net = new int[solutions.size()];
+        int best = 0;
+        for (int s = 0; s < solutions.size(); s++) {
+            Se3_F64 se = solutions.get(s);
+            net[s] = Cheirality.net(p, inliers, inliers.length, se.R.data, vec(se.T), minSin);
+            best = net[s] > net[best] ? s : best;
+        }
+        boolean ambiguous = false;
+        for (int s = 0; s < solutions.size(); s++) {
+            ambiguous |= s != best && net[s] >= 0.9 * net[best] && differentPose(solutions.get(s), solutions.get(best));
+        }
+        Se3_F64 chosen = solutions.get(best);
+        double[] state = LevenbergMarquardt.minimize(new EpipolarPoseProblem(p, inliers),
+                EpipolarPoseProblem.state(chosen.R.data.clone(), vec(chosen.T)), config.refineIterations())
+                .state();
+        return finish(p, inliers, state, ambiguous);
+    }
+
+    /** Drops inliers behind a camera, refits on the rest and builds the pose with its information. */
+    private Recovered finish(PointPairs p, int[] inliers, double[] refined, boolean ambiguous) {
+        double minSin = Cheirality.minSinParallax(p, config);
+        double[] state = resolveCheirality(p, inliers, refined);
+        double[] r = EpipolarPoseProblem.rotation(state);
+        double[] t = EpipolarPoseProblem.translation(state);
+        int kept = 0;
+        int[] front = new int[inliers.length];
+        for (int i : inliers) {
+            if (Cheirality.side(r, t, p.rayA(i), p.rayB(i), minSin) != Cheirality.BEHIND) {
+                front[kept++] = i;
+            }
+        }
+        front = Arrays.copyOf(front, kept);
+        if (kept < config.minInliers()) {
+            Outcome why = inliers.length >= config.minInliers() ? Outcome.POINTS_BEHIND_CAMERA
+                    : Outcome.TOO_FEW_INLIERS;
+            return new Recovered(why, front, Optional.empty(), ResidualStats.none());
+        }
+        EpipolarPoseProblem problem = new EpipolarPoseProblem(p, front);
+        LevenbergMarquardt.Solution sol = LevenbergMarquardt.minimize(problem, state, config.refineIterations());
+        double[] rotation = EpipolarPoseProblem.rotation(sol.state());
+        double[] direction = EpipolarPoseProblem.translation(sol.state());
+        double[] info = InformationMatrix.ofEpipolarPose(sol.jacobian(), sol.residuals(), direction);
+        RelativePose pose = new RelativePose(rotation, Optional.of(direction), Optional.empty(), info, ambiguous);
+        return new Recovered(Outcome.ACCEPTED, front, Optional.of(pose),
+                ResidualStats.of(sol.residuals(), sol.residuals().length));
+    }
+
+    /**
+     * The Sampson cost cannot tell the four poses of one essential matrix apart (t and -t, and the twisted pair),
+     * so on a flat cost valley the refinement may drift to one that puts the points behind the cameras. The
+     * refined E is therefore decomposed again and the pose chosen by cheirality once more.
+     */
+    private double[] resolveCheirality(PointPairs p, int[] inliers, double[] state) {
+        double[] e = Mat3.mul(Mat3.skew(EpipolarPoseProblem.translation(state)), EpipolarPoseProblem.rotation(state));
+        if (!essentialDecomposition.decompose(DMatrixRMaj.wrap(3, 3, e))) {
+            return state;
+        }
+        double[][] pose = bestByCheirality(p, inliers, essentialDecomposition.getSolutions());
+        return EpipolarPoseProblem.state(pose[0], pose[1]);
+    }
+
+    /** The pose (R, t) of the decomposition with the largest front-minus-behind count. */
+    private double[][] bestByCheirality(PointPairs p, int[] inliers, List<Se3_F64> solutions) {
+        double minSin = Cheirality.minSinParallax(p, config);
+        int bestNet = Integer.MIN_VALUE;
+        double[][] best = null;
+        for (Se3_F64 se : solutions) {
+            int net = Cheirality.net(p, inliers, inliers.length, se.R.data, vec(se.T), minSin);
+            if (net > bestNet) {
+                bestNet = net;
+                best = new double[][]{se.R.data.clone(), vec(se.T)};
+            }
+        }
+        return best;
+    }
+
+    private static boolean differentPose(Se3_F64 a, Se3_F64 b) {
+        double[] rel = Mat3.mul(a.R.data, Mat3.transpose(b.R.data));
+        double cos = Mat3.dot(Mat3.unit(vec(a.T)), Mat3.unit(vec(b.T)));
+        return Mat3.angle(rel) > Math.toRadians(1) || cos < Math.cos(Math.toRadians(5));
+    }
+
+    private static double[] vec(Vector3D_F64 v) {
+        return new double[]{v.x, v.y, v.z};
+    }
+
+    static int[] indices(boolean[] mask) {
+        int n = 0;
+        int[] idx = new int[mask.length];
+        for (int i = 0; i < mask.length; i++) {
+            if (mask[i]) {
+                idx[n++] = i;
+            }
+        }
+        return Arrays.copyOf(idx, n);
+    }
+}
