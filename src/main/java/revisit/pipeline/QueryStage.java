@@ -1,0 +1,13 @@
+package revisit.pipeline;
+
+/** The furthest stage one query frame reached in the scan. */
+public enum QueryStage {
+    /** The index proposed no frame outside the exclusion window. */
+    NO_CANDIDATE,
+    /** Candidates came back, but the temporal consistency check did not confirm a revisit. */
+    PROPOSED,
+    /** A revisit was confirmed over time, but geometric verification refused it. */
+    CONSISTENT,
+    /** Geometric verification accepted the revisit: a closure was emitted. */
+    VERIFIED
+}
