@@ -83,6 +83,51 @@ public final class ConfigFile {
         }
     }
 
+    /**
+     * Applies command-line overrides {@code section.field=value} (e.g. {@code index.exclusionSeconds=10}).
+     *
+     * @throws BadInputException naming the override and the fix
+     */
+    public static ScanConfig override(ScanConfig base, java.util.List<String> assignments) {
+        if (assignments.isEmpty()) {
+            return base;
+        }
+        ObjectNode merged = toTree(base);
+        for (String a : assignments) {
+            int eq = a.indexOf('=');
+            int dot = a.indexOf('.');
+            if (eq < 0 || dot < 0 || dot > eq) {
+                throw new BadInputException("--set " + a + ": expected section.field=value, e.g."
+                        + " index.exclusionSeconds=10");
+            }
+            String section = a.substring(0, dot);
+            String field = a.substring(dot + 1, eq);
+            String text = a.substring(eq + 1);
+            JsonNode sec = merged.get(section);
+            if (sec == null || !sec.isObject() || !sec.has(field)) {
+                throw new BadInputException("--set " + a + ": unknown setting '" + section + "." + field
+                        + "'; see docs/FORMAT-config.md for the names");
+            }
+            JsonNode value = sec.get(field).isTextual() ? merged.textNode(text) : parseScalar(a, text);
+            ((ObjectNode) sec).set(field, value);
+        }
+        try {
+            return JSON.treeToValue(merged, ScanConfig.class);
+        } catch (JsonProcessingException e) {
+            String why = e.getCause() != null && e.getCause().getMessage() != null
+                    ? e.getCause().getMessage() : e.getOriginalMessage();
+            throw new BadInputException("--set: " + why, e);
+        }
+    }
+
+    private static JsonNode parseScalar(String assignment, String text) {
+        try {
+            return JSON.readTree(text);
+        } catch (JsonProcessingException e) {
+            throw new BadInputException("--set " + assignment + ": '" + text + "' is not a number or true/false", e);
+        }
+    }
+
     /** The configuration as a JSON tree with format and version fields. */
     public static ObjectNode toTree(ScanConfig config) {
         return JSON.valueToTree(config);
