@@ -14,12 +14,14 @@ final class ClosureFactory {
         this.config = config;
     }
 
-    Closure build(FrameRecord query, FrameRecord match, double score, double normalisedScore, Verification v) {
+    Closure build(FrameRecord query, FrameRecord match, double score, double normalisedScore, Verification v,
+                  String refusal) {
+        boolean accepted = refusal.isEmpty();
         double[] q = {0, 0, 0, 1};
         double[] t = new double[3];
         double[] info = new double[36];
         boolean metric = false;
-        String reason = v.accepted() ? "" : v.outcome().name().toLowerCase(Locale.ROOT);
+        String reason = refusal;
         if (v.pose().isPresent()) {
             RelativePose p = v.pose().get();
             double[] wxyz = p.quaternion();
@@ -34,14 +36,14 @@ final class ClosureFactory {
             if (p.ambiguous() && reason.isEmpty()) {
                 reason = "planar scene: a second pose fits as well";
             }
-        } else if (v.accepted()) {
+        } else if (accepted) {
             reason = "no camera file: relative pose not estimated";
         }
-        ClosureStatus status = v.accepted() ? ClosureStatus.UNCHECKED : ClosureStatus.REJECTED;
+        ClosureStatus status = accepted ? ClosureStatus.UNCHECKED : ClosureStatus.REJECTED;
         return new Closure(query.sequence(), query.frame(), query.time(), query.name(), match.sequence(),
                 match.frame(), match.time(), match.name(), score, normalisedScore, v.inlierCount(), v.inlierRatio(),
                 v.model().name().toLowerCase(Locale.ROOT), q, t, metric, info, status, reason,
-                v.accepted() ? geometricConfidence(v) : 0);
+                accepted ? geometricConfidence(v) : 0);
     }
 
     /**

@@ -23,24 +23,37 @@ final class QueryStep {
 
     private final ScanConfig config;
     private final RevisitSearch search;
-    private final Optional<CameraModel> camera;
     private final boolean keepRejected;
     private final StageTimes times;
-    private final PairVerifier verifier;
+    private final PairCheck check;
     private final ClosureFactory factory;
     private final Map<Long, FrameRecord> frames = new HashMap<>();
     private final List<Closure> closures = new ArrayList<>();
     private final List<QueryTrace> traces = new ArrayList<>();
 
+    /** Verifies one (query, match) pair; the scan uses the verifier directly, tuning puts a cache in front. */
+    @FunctionalInterface
+    interface PairCheck {
+        Verification verify(FrameRecord query, FrameRecord match);
+    }
+
     QueryStep(ScanConfig config, RevisitSearch search, Optional<CameraModel> camera, boolean keepRejected,
               StageTimes times) {
+        this(config, search, keepRejected, times, direct(config, camera));
+    }
+
+    QueryStep(ScanConfig config, RevisitSearch search, boolean keepRejected, StageTimes times, PairCheck check) {
         this.config = config;
         this.search = search;
-        this.camera = camera;
         this.keepRejected = keepRejected;
         this.times = times;
-        this.verifier = new PairVerifier(config.verification());
+        this.check = check;
         this.factory = new ClosureFactory(config.verification());
+    }
+
+    static PairCheck direct(ScanConfig config, Optional<CameraModel> camera) {
+        PairVerifier verifier = new PairVerifier(config.verification());
+        return (q, m) -> verifier.verify(q.features(), q.nodes(), m.features(), m.nodes(), camera);
     }
 
     List<Closure> closures() {
@@ -80,11 +93,12 @@ final class QueryStep {
         Verification lastV = null;
         for (Candidate c : tries) {
             FrameRecord m = frames.get(key(c.sequenceId(), c.frameId()));
-            Verification v = verifier.verify(r.features(), r.nodes(), m.features(), m.nodes(), camera);
+            Verification v = check.verify(r, m);
             last = c;
             lastV = v;
-            Closure closure = factory.build(r, m, c.rawScore(), c.normalisedScore(), v);
-            if (v.accepted()) {
+            String refusal = refusal(v, c);
+            Closure closure = factory.build(r, m, c.rawScore(), c.normalisedScore(), v, refusal);
+            if (refusal.isEmpty()) {
                 closures.add(closure);
                 return new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.VERIFIED, c.sequenceId(),
                         c.frameId(), c.normalisedScore(), OptionalInt.of(v.inlierCount()), "accepted");
@@ -94,8 +108,28 @@ final class QueryStep {
             }
         }
         return new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.CONSISTENT, last.sequenceId(),
-                last.frameId(), last.normalisedScore(), OptionalInt.of(lastV.inlierCount()),
-                lastV.outcome().name().toLowerCase(java.util.Locale.ROOT));
+                last.frameId(), last.normalisedScore(), OptionalInt.of(lastV.inlierCount()), refusal(lastV, last));
+    }
+
+    /**
+     * Why a verification does not make a closure, or "" when it does: the verifier's own verdict, then the
+     * inlier minimum (applied here too so a verifier run with a lower minimum can be reused), the inlier ratio
+     * and the score threshold of the scan settings.
+     */
+    private String refusal(Verification v, Candidate c) {
+        if (!v.accepted()) {
+            return v.outcome().name().toLowerCase(java.util.Locale.ROOT);
+        }
+        if (v.inlierCount() < config.verification().minInliers()) {
+            return "too_few_inliers";
+        }
+        if (v.inlierRatio() < config.scan().minInlierRatio()) {
+            return "low_inlier_ratio";
+        }
+        if (c.normalisedScore() < config.scan().minScore()) {
+            return "below_score_threshold";
+        }
+        return "";
     }
 
     /** The chosen group's best frame, then its next best members, up to the configured count. */

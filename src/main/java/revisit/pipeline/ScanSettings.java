@@ -16,9 +16,16 @@ import revisit.io.BadFramePolicy;
  *                             crash loses at most ten frames of work
  * @param verifyTopCandidates  how many of the chosen group's best frames are verified until one passes, 1-10;
  *                             default 2 (a second try rescues a revisit whose best frame is blurred)
+ * @param minInlierRatio       a verified pair becomes a closure only when inliers / putative matches reach this,
+ *                             0-1; default 0.3, measured here: on the Middlebury dino ring (Seitz et al., CVPR
+ *                             2006) wrong pairs that passed 12 inliers had ratios 0.15-0.24 and true ones 0.31-0.91
+ *                             (docs/SCAN.md); random matches rarely agree on one geometry at that rate
+ * @param minScore             a verified pair becomes a closure only when its normalised retrieval score reaches
+ *                             this, 0 (off) to ~10; default 0 (off); {@code tune} sets it from labelled data
  */
 public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy badFrames, double frameRateHz,
-                           int checkpointEveryFrames, int verifyTopCandidates) {
+                           int checkpointEveryFrames, int verifyTopCandidates, double minInlierRatio,
+                           double minScore) {
 
     public ScanSettings {
         if (threads < 0 || threads > 256) {
@@ -40,11 +47,17 @@ public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy ba
         if (verifyTopCandidates < 1 || verifyTopCandidates > 10) {
             throw new IllegalArgumentException("verifyTopCandidates must be in [1, 10], was " + verifyTopCandidates);
         }
+        if (!(minInlierRatio >= 0 && minInlierRatio <= 1)) {
+            throw new IllegalArgumentException("minInlierRatio must be in [0, 1], was " + minInlierRatio);
+        }
+        if (!(minScore >= 0 && minScore <= 1e9)) {
+            throw new IllegalArgumentException("minScore must be in [0, 1e9], was " + minScore);
+        }
     }
 
     /** The defaults documented on each field. */
     public static ScanSettings defaults() {
-        return new ScanSettings(0, 2, BadFramePolicy.SKIP, 10.0, 10, 2);
+        return new ScanSettings(0, 2, BadFramePolicy.SKIP, 10.0, 10, 2, 0.3, 0);
     }
 
     /** Worker threads actually used. */
@@ -54,28 +67,41 @@ public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy ba
 
     public ScanSettings withThreads(int v) {
         return new ScanSettings(v, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames,
-                verifyTopCandidates);
+                verifyTopCandidates, minInlierRatio, minScore);
     }
 
     public ScanSettings withMatchingNodeLevel(int v) {
-        return new ScanSettings(threads, v, badFrames, frameRateHz, checkpointEveryFrames, verifyTopCandidates);
+        return new ScanSettings(threads, v, badFrames, frameRateHz, checkpointEveryFrames, verifyTopCandidates,
+                minInlierRatio, minScore);
     }
 
     public ScanSettings withBadFrames(BadFramePolicy v) {
         return new ScanSettings(threads, matchingNodeLevel, v, frameRateHz, checkpointEveryFrames,
-                verifyTopCandidates);
+                verifyTopCandidates, minInlierRatio, minScore);
     }
 
     public ScanSettings withFrameRateHz(double v) {
         return new ScanSettings(threads, matchingNodeLevel, badFrames, v, checkpointEveryFrames,
-                verifyTopCandidates);
+                verifyTopCandidates, minInlierRatio, minScore);
     }
 
     public ScanSettings withCheckpointEveryFrames(int v) {
-        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, v, verifyTopCandidates);
+        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, v, verifyTopCandidates,
+                minInlierRatio, minScore);
+    }
+
+    public ScanSettings withMinInlierRatio(double v) {
+        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames,
+                verifyTopCandidates, v, minScore);
+    }
+
+    public ScanSettings withMinScore(double v) {
+        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames,
+                verifyTopCandidates, minInlierRatio, v);
     }
 
     public ScanSettings withVerifyTopCandidates(int v) {
-        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames, v);
+        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames, v,
+                minInlierRatio, minScore);
     }
 }

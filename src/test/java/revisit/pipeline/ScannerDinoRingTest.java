@@ -49,12 +49,13 @@ class ScannerDinoRingTest {
             steps = Math.min(steps, 48 - steps);
             assertTrue(steps <= MAX_TRUE_STEPS, "false closure " + c + " (" + steps + " ring steps apart)");
             double[] err = poseError(c, truth.get(c.queryName()), truth.get(c.matchName()));
-            if (c.queryFrame() >= 45 && c.matchFrame() <= 2) {
+            if (c.queryFrame() == 47 && c.matchFrame() == 0) {
                 ringClosed = true;
-                // Bounds: 2 degrees of rotation, 10 degrees of translation direction for views 7.5-22.5 degrees
-                // apart on the ring (measured errors are reported in docs/SCAN.md).
+                // Bounds for the neighbouring views (7.5 degrees apart on the ring, seen through a 11-degree
+                // field of view): 2 degrees of rotation, 5 degrees of translation direction. Wider pairs of this
+                // narrow-view ring give much worse poses (measured in docs/SCAN.md).
                 assertTrue(err[0] < 2.0, c + " rotation error " + err[0] + " deg");
-                assertTrue(err[1] < 10.0, c + " translation direction error " + err[1] + " deg");
+                assertTrue(err[1] < 5.0, c + " translation direction error " + err[1] + " deg");
             }
         }
         assertTrue(ringClosed, "no closure between the last and first views: " + r.closures());
