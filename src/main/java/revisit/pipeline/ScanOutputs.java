@@ -20,6 +20,7 @@ public final class ScanOutputs {
     public static final String CONFIG = "config.used.json";
     public static final String SUMMARY = "summary.txt";
     public static final String CHECKPOINT = "scan.ckpt";
+    public static final String SEQUENCES = "sequences.txt";
 
     private ScanOutputs() {
     }
@@ -43,6 +44,35 @@ public final class ScanOutputs {
         writeTraces(dir.resolve(TRACES), result);
         ConfigFile.write(dir.resolve(CONFIG), config, "effective configuration of the scan that wrote this folder");
         AtomicFiles.writeString(dir.resolve(SUMMARY), summary(result));
+        StringBuilder seq = new StringBuilder("# revisit-sequences 1: id, name, absolute path\n");
+        for (int i = 0; i < result.sequences().size(); i++) {
+            SequenceInput in = result.sequences().get(i);
+            seq.append(i).append('\t').append(in.name()).append('\t')
+                    .append(in.path().toAbsolutePath().normalize()).append('\n');
+        }
+        AtomicFiles.writeString(dir.resolve(SEQUENCES), seq.toString());
+    }
+
+    /** Reads the sequences a scan wrote (id order). */
+    public static List<SequenceInput> readSequences(Path dir) {
+        Path file = dir.resolve(SEQUENCES);
+        try {
+            List<SequenceInput> out = new java.util.ArrayList<>();
+            for (String line : java.nio.file.Files.readAllLines(file, StandardCharsets.UTF_8)) {
+                if (line.startsWith("#") || line.isBlank()) {
+                    continue;
+                }
+                String[] f = line.split("\t");
+                if (f.length != 3) {
+                    throw new revisit.io.BadInputException(file + ": malformed line '" + line + "'");
+                }
+                out.add(new SequenceInput(Path.of(f[2]), f[1]));
+            }
+            return out;
+        } catch (java.io.IOException e) {
+            throw new revisit.io.BadInputException(file + ": cannot read (" + e.getMessage()
+                    + "); point at the output folder of a scan", e);
+        }
     }
 
     /** Per-query traces as CSV (docs/FORMAT-closures.md). */
