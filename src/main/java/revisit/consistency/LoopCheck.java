@@ -1,6 +1,9 @@
 package revisit.consistency;
 
 import georegression.struct.se.Se3_F64;
+import java.util.HashMap;
+import java.util.IdentityHashMap;
+import java.util.Map;
 import java.util.Optional;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
@@ -24,6 +27,7 @@ import revisit.verification.RotationVector;
  * <li>Both monocular: as above, with the unknown length s of one closure's translation chosen to minimise the
  * angle statistic over s >= 0 (closed-form best angle plus a logarithmic grid), so 1 dof for the direction.</li>
  * </ul>
+ * Not thread-safe: caches reversed closures and closure covariances by closure id (ids are unique within a check).
  */
 final class LoopCheck {
 
@@ -32,6 +36,8 @@ final class LoopCheck {
     private final StretchMotion stretches;
     private final ConsistencyConfig config;
     private final double[] gates = new double[7];
+    private final Map<String, ClosureConstraint> reversedById = new HashMap<>();
+    private final Map<ClosureConstraint, UncertainPose> metricPoses = new IdentityHashMap<>();
 
     LoopCheck(StretchMotion stretches, ConsistencyConfig config) {
         this.stretches = stretches;
@@ -42,11 +48,12 @@ final class LoopCheck {
     }
 
     PairOutcome test(ClosureConstraint i, ClosureConstraint second) {
-        Optional<ClosureConstraint> partner = orient(i, second);
-        if (partner.isEmpty()) {
+        Optional<Boolean> reverse = orientation(i, second);
+        if (reverse.isEmpty()) {
             return PairOutcome.untested(i.id(), second.id(), UncheckedReason.NO_PARTNER);
         }
-        ClosureConstraint j = partner.get();
+        ClosureConstraint j = reverse.get()
+                ? reversedById.computeIfAbsent(second.id(), id -> second.reversed()) : second;
         StretchMotion.Stretch first = stretches.between(j.a(), i.a());
         StretchMotion.Stretch other = stretches.between(i.b(), j.b());
         if (first.motion().isEmpty() || other.motion().isEmpty()) {
@@ -74,23 +81,24 @@ final class LoopCheck {
     }
 
     /**
-     * The second closure oriented to run between the same sequences as the first (reversed if needed); when both
-     * orientations fit (closures within one sequence), the one whose ends are closer in time.
+     * Whether the second closure must be reversed to run between the same sequences as the first; when both
+     * orientations fit (closures within one sequence), the one whose ends are closer in time. Empty when the two
+     * closures do not join the same pair of sequences.
      */
-    static Optional<ClosureConstraint> orient(ClosureConstraint i, ClosureConstraint j) {
-        ClosureConstraint best = null;
-        double bestGap = Double.POSITIVE_INFINITY;
-        for (ClosureConstraint candidate : new ClosureConstraint[]{j, j.reversed()}) {
-            if (candidate.a().sequence().equals(i.a().sequence()) && candidate.b().sequence().equals(i.b().sequence())) {
-                double gap = Math.abs(candidate.a().timeSeconds() - i.a().timeSeconds())
-                        + Math.abs(candidate.b().timeSeconds() - i.b().timeSeconds());
-                if (gap < bestGap) {
-                    bestGap = gap;
-                    best = candidate;
-                }
-            }
+    static Optional<Boolean> orientation(ClosureConstraint i, ClosureConstraint j) {
+        double forward = gap(i, j.a(), j.b());
+        double backward = gap(i, j.b(), j.a());
+        if (Double.isInfinite(forward) && Double.isInfinite(backward)) {
+            return Optional.empty();
         }
-        return Optional.ofNullable(best);
+        return Optional.of(backward < forward);
+    }
+
+    private static double gap(ClosureConstraint i, FrameRef a, FrameRef b) {
+        if (!a.sequence().equals(i.a().sequence()) || !b.sequence().equals(i.b().sequence())) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return Math.abs(a.timeSeconds() - i.a().timeSeconds()) + Math.abs(b.timeSeconds() - i.b().timeSeconds());
     }
 
     /** Minimum of the direction statistic over the unknown length s >= 0 of closure i's translation. */
@@ -155,11 +163,12 @@ final class LoopCheck {
      * {@code scale^2 directionSigma^2 (I - u u^T)} across the direction u (in B's frame).
      */
     private UncertainPose uncertain(ClosureConstraint c, double scale) {
+        if (c.metric()) {
+            return metricPoses.computeIfAbsent(c, m -> new UncertainPose(m.aFromB(),
+                    inverse(new DMatrixRMaj(6, 6, true, m.information()))));
+        }
         DMatrixRMaj info = new DMatrixRMaj(6, 6, true, c.information());
         Se3_F64 pose = c.aFromB();
-        if (c.metric()) {
-            return new UncertainPose(pose, inverse(info));
-        }
         DMatrixRMaj cov = new DMatrixRMaj(6, 6);
         CommonOps_DDRM.insert(inverse(CommonOps_DDRM.extract(info, 0, 3, 0, 3)), cov, 0, 0);
         double[] u = new double[3];

@@ -1,6 +1,7 @@
 package revisit.consistency;
 
 import georegression.struct.se.Se3_F64;
+import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 
@@ -9,12 +10,14 @@ import java.util.Optional;
  * covariance from the drift model: translation sigma {@code max(floor, driftFraction * distance)}, rotation sigma
  * {@code max(floor, rotationPerMetre * distance + rotationFraction * angleTurned)}, both per axis. Stretches longer
  * than {@link ConsistencyConfig#maxStretchSeconds()} or with a rotation sigma above
- * {@link ConsistencyConfig#maxStretchRotationSigmaRad()} are refused.
+ * {@link ConsistencyConfig#maxStretchRotationSigmaRad()} are refused. Not thread-safe: caches the interpolated pose
+ * of every frame it has seen (poses are copied out by {@link Se3_F64#concat}, never handed out).
  */
 final class OdometryStretches implements StretchMotion {
 
     private final Map<String, OdometryTrack> tracks;
     private final ConsistencyConfig config;
+    private final Map<FrameRef, Optional<Se3_F64>> poses = new HashMap<>();
 
     OdometryStretches(Map<String, OdometryTrack> tracks, ConsistencyConfig config) {
         this.tracks = Map.copyOf(tracks);
@@ -27,8 +30,8 @@ final class OdometryStretches implements StretchMotion {
         if (track == null) {
             return Stretch.missing(UncheckedReason.NO_ODOMETRY_FOR_SEQUENCE);
         }
-        Optional<Se3_F64> start = track.poseAt(from.timeSeconds());
-        Optional<Se3_F64> end = track.poseAt(to.timeSeconds());
+        Optional<Se3_F64> start = poses.computeIfAbsent(from, f -> track.poseAt(f.timeSeconds()));
+        Optional<Se3_F64> end = poses.computeIfAbsent(to, f -> track.poseAt(f.timeSeconds()));
         if (start.isEmpty() || end.isEmpty()) {
             return Stretch.missing(UncheckedReason.OUTSIDE_ODOMETRY);
         }

@@ -2,6 +2,7 @@ package revisit.consistency;
 
 import georegression.geometry.ConvertRotation3D_F64;
 import georegression.struct.se.Se3_F64;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import revisit.io.StampedPose;
@@ -84,7 +85,7 @@ public final class OdometryTrack {
 
     /** Index of the last sample at or before t (t covered). */
     private int segment(double t) {
-        int found = java.util.Arrays.binarySearch(times, t);
+        int found = Arrays.binarySearch(times, t);
         int i = found >= 0 ? found : -found - 2;
         return Math.max(0, Math.min(i, times.length - 1));
     }

@@ -1,7 +1,10 @@
 package revisit.verification;
 
 import georegression.struct.se.Se3_F64;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
+import java.util.stream.IntStream;
 
 /**
  * Correspondences between 3D points seen with depth in both frames, for RANSAC and refinement of {@code aFromB}.
@@ -38,7 +41,7 @@ final class AlignmentModel implements PoseRansac.Model {
                 chosen[n++] = i;
             }
         }
-        this.matches = java.util.Arrays.copyOf(chosen, n);
+        this.matches = Arrays.copyOf(chosen, n);
     }
 
     /** Input match index of correspondence k. */
@@ -63,7 +66,7 @@ final class AlignmentModel implements PoseRansac.Model {
     }
 
     /** Least-squares fit to all marked correspondences (Umeyama), empty when degenerate. */
-    java.util.Optional<Se3_F64> refit(boolean[] mask) {
+    Optional<Se3_F64> refit(boolean[] mask) {
         int[] chosen = new int[matches.length];
         int n = 0;
         for (int k = 0; k < matches.length; k++) {
@@ -86,7 +89,7 @@ final class AlignmentModel implements PoseRansac.Model {
 
     /** Whitened residuals over the marked correspondences. */
     PoseLeastSquares.Residuals residuals(boolean[] mask) {
-        int[] chosen = java.util.stream.IntStream.range(0, matches.length).filter(k -> mask[k])
+        int[] chosen = IntStream.range(0, matches.length).filter(k -> mask[k])
                 .map(k -> matches[k]).toArray();
         return new PoseLeastSquares.Residuals() {
             @Override

@@ -1,8 +1,10 @@
 package revisit.verification;
 
 import georegression.struct.se.Se3_F64;
+import java.util.Arrays;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.IntUnaryOperator;
 import revisit.camera.CameraModel;
 
 /**
@@ -71,8 +73,7 @@ public final class MetricPoseEstimator {
 
     private MetricPoseResult estimate(PoseRansac.Model model, Function<boolean[], Optional<Se3_F64>> refit,
                                       Function<boolean[], PoseLeastSquares.Residuals> residuals,
-                                      java.util.function.IntUnaryOperator matchIndex, int matchCount,
-                                      MetricMethod method) {
+                                      IntUnaryOperator matchIndex, int matchCount, MetricMethod method) {
         int usable = model.size();
         if (usable < config.minInliers()) {
             return MetricPoseResult.rejected(MetricRejection.TOO_FEW_POINTS_WITH_DEPTH, usable, 0);
@@ -84,50 +85,63 @@ public final class MetricPoseEstimator {
                     found.map(PoseRansac.Outcome::inliers).orElse(0));
         }
         boolean[] mask = found.get().mask();
-        Se3_F64 pose = refit.apply(mask).orElse(found.get().aFromB());
-        int inliers = rescore(model, pose, mask);
-        Optional<PoseLeastSquares.Solution> solution = Optional.empty();
-        for (int round = 0; round < MAX_ROUNDS && inliers >= config.minInliers(); round++) {
-            solution = PoseLeastSquares.refine(residuals.apply(mask), pose, config.maxRefineIterations());
-            if (solution.isEmpty()) {
-                break;
-            }
-            pose = solution.get().aFromB();
-            boolean[] before = mask.clone();
-            inliers = rescore(model, pose, mask);
-            if (java.util.Arrays.equals(before, mask)) {
-                break;
-            }
-            solution = Optional.empty();
+        Se3_F64 start = refit.apply(mask).orElse(found.get().aFromB());
+        int inliers = model.score(start, mask);
+        if (inliers < config.minInliers()) {
+            return MetricPoseResult.rejected(MetricRejection.NO_CONSENSUS, usable, inliers);
         }
+        Optional<PoseLeastSquares.Solution> solution = refineRounds(model, residuals, start, mask);
+        inliers = count(mask);
         if (inliers < config.minInliers()) {
             return MetricPoseResult.rejected(MetricRejection.NO_CONSENSUS, usable, inliers);
         }
         if (solution.isEmpty()) {
-            solution = PoseLeastSquares.refine(residuals.apply(mask), pose, 0);
-        }
-        if (solution.isEmpty()) {
             return MetricPoseResult.rejected(MetricRejection.DEGENERATE_GEOMETRY, usable, inliers);
         }
-        return MetricPoseResult.accepted(pose(solution.get(), mask, matchIndex, matchCount, usable, inliers,
-                residuals.apply(mask).size(), method));
-    }
-
-    private static int rescore(PoseRansac.Model model, Se3_F64 pose, boolean[] mask) {
-        return model.score(pose, mask);
-    }
-
-    private static MetricPose pose(PoseLeastSquares.Solution solution, boolean[] mask,
-                                   java.util.function.IntUnaryOperator matchIndex, int matchCount, int usable,
-                                   int inliers, int residualCount, MetricMethod method) {
         boolean[] inputMask = new boolean[matchCount];
         for (int k = 0; k < mask.length; k++) {
             if (mask[k]) {
                 inputMask[matchIndex.applyAsInt(k)] = true;
             }
         }
-        double varianceFactor = residualCount > 6 ? solution.cost() / (residualCount - 6) : Double.NaN;
-        return new MetricPose(solution.aFromB(), solution.information().data, method, inliers, usable, inputMask,
-                varianceFactor);
+        int residualCount = residuals.apply(mask).size();
+        double varianceFactor = solution.get().cost() / (residualCount - 6);
+        return MetricPoseResult.accepted(new MetricPose(solution.get().aFromB(), solution.get().information().data,
+                method, inliers, usable, inputMask, varianceFactor));
+    }
+
+    /**
+     * Refines on the inliers, re-selects inliers at the refined pose, and repeats until the set is stable (at most
+     * {@link #MAX_ROUNDS} rounds). The mask is updated in place; the solution's information refers to the final mask.
+     */
+    private Optional<PoseLeastSquares.Solution> refineRounds(PoseRansac.Model model,
+                                                             Function<boolean[], PoseLeastSquares.Residuals> residuals,
+                                                             Se3_F64 start, boolean[] mask) {
+        Se3_F64 pose = start;
+        for (int round = 0; round < MAX_ROUNDS && count(mask) >= config.minInliers(); round++) {
+            Optional<PoseLeastSquares.Solution> solution = PoseLeastSquares.refine(residuals.apply(mask), pose,
+                    config.maxRefineIterations());
+            if (solution.isEmpty()) {
+                return solution;
+            }
+            pose = solution.get().aFromB();
+            boolean[] before = mask.clone();
+            model.score(pose, mask);
+            if (Arrays.equals(before, mask)) {
+                return solution;
+            }
+        }
+        if (count(mask) < config.minInliers()) {
+            return Optional.empty();
+        }
+        return PoseLeastSquares.refine(residuals.apply(mask), pose, 0);
+    }
+
+    private static int count(boolean[] mask) {
+        int n = 0;
+        for (boolean b : mask) {
+            n += b ? 1 : 0;
+        }
+        return n;
     }
 }

@@ -7,10 +7,12 @@ import boofcv.factory.geo.FactoryMultiView;
 import boofcv.struct.geo.Point2D3D;
 import georegression.struct.se.Se3_F64;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.stream.IntStream;
 import org.ddogleg.struct.DogArray;
+import org.ejml.data.DMatrixRMaj;
 
 /**
  * Correspondences between 3D points of frame A (from depth) and normalised image points of frame B, for RANSAC and
@@ -143,7 +145,7 @@ final class ResectionModel implements PoseRansac.Model {
             e[0] = BEHIND_CAMERA;
             e[1] = BEHIND_CAMERA;
             if (jacobian != null) {
-                java.util.Arrays.fill(jacobian, offset, offset + 12, 0);
+                Arrays.fill(jacobian, offset, offset + 12, 0);
             }
             return 2 * BEHIND_CAMERA * BEHIND_CAMERA;
         }
@@ -167,7 +169,7 @@ final class ResectionModel implements PoseRansac.Model {
     }
 
     /** Cholesky factor (l00, l10, l11) of sigma_px^2 I + J_e R^T Sigma_A R J_e^T. */
-    private double[] whitening(org.ejml.data.DMatrixRMaj r, int i, double[] je) {
+    private double[] whitening(DMatrixRMaj r, int i, double[] je) {
         double[] rt = new double[9];
         for (int row = 0; row < 3; row++) {
             for (int col = 0; col < 3; col++) {
@@ -175,7 +177,7 @@ final class ResectionModel implements PoseRansac.Model {
             }
         }
         double[] sy = new double[9];
-        Cholesky3.rotate(new org.ejml.data.DMatrixRMaj(3, 3, true, rt), a.covariance, 9 * i, sy);
+        Cholesky3.rotate(new DMatrixRMaj(3, 3, true, rt), a.covariance, 9 * i, sy);
         double[] c = new double[4];
         for (int p = 0; p < 2; p++) {
             for (int q = 0; q < 2; q++) {

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.SplittableRandom;
+import revisit.io.StampedPose;
 
 /**
  * Test fixture: true and planted false closures on a {@link TwoLapTrajectory}. True closures join a lap-1 frame to
@@ -28,7 +29,7 @@ final class ClosureScenario {
         this.random = new SplittableRandom(seed);
     }
 
-    Map<String, List<revisit.io.StampedPose>> odometry() {
+    Map<String, List<StampedPose>> odometry() {
         return Map.of(TwoLapTrajectory.SEQUENCE, trajectory.odometry);
     }
 

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
 
@@ -124,12 +125,12 @@ class ConsistencyCheckTest {
         TwoLapTrajectory shortDrive = drive(6);
         shortDrive.odometry.subList(300, shortDrive.odometry.size()).clear();
         ConsistencyReport report = new ConsistencyCheck(ConsistencyConfig.defaults())
-                .check(scenario.closures, java.util.Map.of(TwoLapTrajectory.SEQUENCE, shortDrive.odometry));
+                .check(scenario.closures, Map.of(TwoLapTrajectory.SEQUENCE, shortDrive.odometry));
         for (ClosureVerdict v : report.verdicts()) {
             assertEquals(Optional.of(UncheckedReason.OUTSIDE_ODOMETRY), v.uncheckedReason());
         }
         ConsistencyReport none = new ConsistencyCheck(ConsistencyConfig.defaults())
-                .check(scenario.closures, java.util.Map.of("other", shortDrive.odometry));
+                .check(scenario.closures, Map.of("other", shortDrive.odometry));
         assertEquals(Optional.of(UncheckedReason.NO_ODOMETRY_FOR_SEQUENCE), none.verdicts().get(0).uncheckedReason());
     }
 

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import boofcv.struct.image.GrayU16;
 import georegression.struct.se.Se3_F64;
+import java.util.SplittableRandom;
 import org.ejml.data.DMatrixRMaj;
 import org.junit.jupiter.api.Test;
 import revisit.camera.CameraModel;
@@ -149,7 +150,7 @@ class MetricPoseEstimatorTest {
     }
 
     private static DepthImage withDepthNoise(DepthImage clean, double sigmaAtOneMetre, long seed) {
-        java.util.SplittableRandom random = new java.util.SplittableRandom(seed);
+        SplittableRandom random = new SplittableRandom(seed);
         GrayU16 out = clean.image().clone();
         for (int i = 0; i < out.data.length; i++) {
             double z = (out.data[i] & 0xFFFF) * clean.metresPerUnit();

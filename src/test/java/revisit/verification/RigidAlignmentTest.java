@@ -9,6 +9,7 @@ import georegression.struct.se.Se3_F64;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
+import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.CommonOps_DDRM;
 import org.junit.jupiter.api.Test;
 
@@ -139,8 +140,8 @@ class RigidAlignmentTest {
         return list;
     }
 
-    private static org.ejml.data.DMatrixRMaj diff(Se3_F64 a, Se3_F64 b) {
-        org.ejml.data.DMatrixRMaj d = new org.ejml.data.DMatrixRMaj(3, 3);
+    private static DMatrixRMaj diff(Se3_F64 a, Se3_F64 b) {
+        DMatrixRMaj d = new DMatrixRMaj(3, 3);
         CommonOps_DDRM.subtract(a.R, b.R, d);
         return d;
     }
