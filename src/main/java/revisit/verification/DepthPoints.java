@@ -100,13 +100,4 @@ final class DepthPoints {
             }
         }
     }
-
-    /** Number of valid points. */
-    int validCount() {
-        int n = 0;
-        for (boolean b : valid) {
-            n += b ? 1 : 0;
-        }
-        return n;
-    }
 }
