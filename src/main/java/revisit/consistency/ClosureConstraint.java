@@ -12,7 +12,8 @@ import revisit.verification.MetricPose;
  *
  * <p>Pose convention: {@code aFromB} maps points from B's camera coordinates into A's, {@code X_A = R X_B + t}; t is
  * B's camera centre in A's frame. With {@code metric} true, t is in metres. With {@code metric} false (monocular,
- * scale unknown) t is the unit direction towards B's centre.
+ * scale unknown) t is the unit direction towards B's centre, or zero when the direction is unobservable (e.g. a pure
+ * rotation); such a closure is checked on rotation only.
  *
  * <p>Information matrix: 6x6, row-major, order (rotation, translation), on the right perturbation
  * {@code aFromB_true = aFromB Exp(xi)}, {@code xi = (omega [rad], v [m, in B's frame])}, as {@link MetricPose}
@@ -63,6 +64,32 @@ public record ClosureConstraint(String id, FrameRef a, FrameRef b, Se3_F64 aFrom
     public static ClosureConstraint fromMetricPose(String id, FrameRef a, FrameRef b, MetricPose pose) {
         return new ClosureConstraint(id, a, b, pose.aFromB(), pose.information(), true, pose.inlierCount(),
                 pose.inlierRatio());
+    }
+
+    /**
+     * Swaps the two 3x3 diagonal blocks and the off-diagonal blocks of a 6x6 information matrix, converting between
+     * the (rotation, translation) order used here and the (translation, rotation) order of pose-graph edge files. It
+     * is its own inverse.
+     *
+     * @param information 6x6 row-major; not modified
+     * @return the reordered copy
+     */
+    public static double[] swapRotationAndTranslation(double[] information) {
+        if (information.length != 36) {
+            throw new IllegalArgumentException("information must hold 36 values, held " + information.length);
+        }
+        double[] out = new double[36];
+        for (int r = 0; r < 6; r++) {
+            for (int c = 0; c < 6; c++) {
+                out[6 * ((r + 3) % 6) + (c + 3) % 6] = information[6 * r + c];
+            }
+        }
+        return out;
+    }
+
+    /** True for a monocular closure whose direction is unobservable (zero translation). */
+    public boolean hasNoDirection() {
+        return !metric && aFromB.T.norm() == 0;
     }
 
     @Override
@@ -123,9 +150,9 @@ public record ClosureConstraint(String id, FrameRef a, FrameRef b, Se3_F64 aFrom
         if (!Double.isFinite(norm)) {
             throw new IllegalArgumentException("closure " + id + ": translation must be finite");
         }
-        if (!metric && Math.abs(norm - 1) > UNIT_TOLERANCE) {
-            throw new IllegalArgumentException("closure " + id + ": monocular translation must be a unit direction, norm was "
-                    + norm);
+        if (!metric && Math.abs(norm - 1) > UNIT_TOLERANCE && norm != 0) {
+            throw new IllegalArgumentException("closure " + id + ": monocular translation must be a unit direction (or "
+                    + "zero when unobservable), norm was " + norm);
         }
     }
 

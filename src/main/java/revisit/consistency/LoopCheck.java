@@ -26,6 +26,7 @@ import revisit.verification.RotationVector;
  * odometry (2 dof), the angle scaled by its sigma {@code sqrt(sigma_perp^2 / |p|^2 + directionSigma^2)}.</li>
  * <li>Both monocular: as above, with the unknown length s of one closure's translation chosen to minimise the
  * angle statistic over s >= 0 (closed-form best angle plus a logarithmic grid), so 1 dof for the direction.</li>
+ * <li>A monocular closure without a direction (zero translation): rotation part only, 3 dof.</li>
  * </ul>
  * Not thread-safe: caches reversed closures and closure covariances by closure id (ids are unique within a check).
  */
@@ -69,6 +70,9 @@ final class LoopCheck {
             return PairOutcome.tested(i.id(), j.id(), mahalanobis(e, cov, 6), 6, gates[6]);
         }
         double rotation = mahalanobis(e, CommonOps_DDRM.extract(cov, 0, 3, 0, 3), 3);
+        if (i.hasNoDirection() || j.hasNoDirection()) {
+            return PairOutcome.tested(i.id(), j.id(), rotation, 3, gates[3]);
+        }
         if (i.metric()) {
             double direction = direction(o1.then(uncertain(i, 1)).then(o2), j);
             return PairOutcome.tested(i.id(), j.id(), rotation + direction, 5, gates[5]);

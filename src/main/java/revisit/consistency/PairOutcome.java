@@ -11,7 +11,8 @@ import java.util.Optional;
  * @param reason            why untested (present exactly when state is UNTESTED)
  * @param distanceSquared   squared Mahalanobis distance of the loop error (0 when untested)
  * @param degreesOfFreedom  6 for two metric closures, 5 for metric with monocular, 4 for two monocular ones
- *                          (rotation 3 + direction 2, minus 1 for the fitted scale), 0 when untested
+ *                          (rotation 3 + direction 2, minus 1 for the fitted scale), 3 when a monocular closure
+ *                          has no direction, 0 when untested
  * @param threshold         chi-square gate the distance was compared with (0 when untested)
  */
 public record PairOutcome(String firstId, String secondId, PairState state, Optional<UncheckedReason> reason,

@@ -41,7 +41,7 @@ final class DepthPoints {
      * Back-projects one side of the matches.
      *
      * @param camera camera model of the frame
-     * @param depth  depth image of the frame, or null for "no depth" (only normalised coordinates are filled)
+     * @param depth  depth image of the frame
      * @param u      columns, pixels
      * @param v      rows, pixels
      * @param config noise model and depth range
@@ -53,9 +53,6 @@ final class DepthPoints {
             camera.pixelToNormalized(u[i], v[i], m);
             points.normalized[2 * i] = m[0];
             points.normalized[2 * i + 1] = m[1];
-            if (depth == null) {
-                continue;
-            }
             OptionalDouble z = depth.depthAt(u[i], v[i], config.sampling(), config.maxRelativeDepthJump());
             if (z.isEmpty() || z.getAsDouble() < config.minDepthMetres() || z.getAsDouble() > config.maxDepthMetres()) {
                 continue;
@@ -63,6 +60,18 @@ final class DepthPoints {
             double slopeU = slope(depth, u[i] - SLOPE_STEP, v[i], u[i] + SLOPE_STEP, v[i], z.getAsDouble(), config);
             double slopeV = slope(depth, u[i], v[i] - SLOPE_STEP, u[i], v[i] + SLOPE_STEP, z.getAsDouble(), config);
             points.set(i, m, z.getAsDouble(), slopeU, slopeV, camera, config);
+        }
+        return points;
+    }
+
+    /** Normalised coordinates only, for a frame without depth (no point is valid). */
+    static DepthPoints withoutDepth(CameraModel camera, float[] u, float[] v) {
+        DepthPoints points = new DepthPoints(u.length);
+        double[] m = new double[2];
+        for (int i = 0; i < u.length; i++) {
+            camera.pixelToNormalized(u[i], v[i], m);
+            points.normalized[2 * i] = m[0];
+            points.normalized[2 * i + 1] = m[1];
         }
         return points;
     }

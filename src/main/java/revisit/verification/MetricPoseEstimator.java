@@ -64,7 +64,7 @@ public final class MetricPoseEstimator {
      */
     public MetricPoseResult resectWithDepthInA(MatchedPixels matches, DepthImage depthA) {
         DepthPoints a = DepthPoints.backProject(camera, depthA, matches.xA(), matches.yA(), config);
-        DepthPoints b = DepthPoints.backProject(camera, null, matches.xB(), matches.yB(), config);
+        DepthPoints b = DepthPoints.withoutDepth(camera, matches.xB(), matches.yB());
         ResectionModel model = new ResectionModel(a, b, camera.fx(), camera.fy(), config.pixelSigmaPx(),
                 ChiSquareQuantile.quantile(2, config.inlierProbability()));
         return estimate(model, model::refit, model::residuals, model::matchIndex, matches.count(),

@@ -52,16 +52,11 @@ final class PoseLeastSquares {
         double lambda = 1e-4;
         LinearSolverDense<DMatrixRMaj> solver = LinearSolverFactory_DDRM.symmPosDef(6);
         for (int iter = 0; iter < maxIterations; iter++) {
-            DMatrixRMaj damped = h.copy();
-            for (int k = 0; k < 6; k++) {
-                damped.add(k, k, lambda * h.get(k, k));
-            }
-            DMatrixRMaj step = new DMatrixRMaj(6, 1);
-            if (!solver.setA(damped)) {
+            Optional<DMatrixRMaj> solved = dampedStep(h, g, lambda, solver);
+            if (solved.isEmpty()) {
                 return Optional.empty();
             }
-            solver.solve(g, step);
-            CommonOps_DDRM.scale(-1, step);
+            DMatrixRMaj step = solved.get();
             Se3_F64 candidate = retract(pose, step.data);
             f.evaluate(candidate, r, null);
             double candidateCost = dot(r, m);
@@ -84,6 +79,22 @@ final class PoseLeastSquares {
             return Optional.empty();
         }
         return Optional.of(new Solution(pose, h, cost));
+    }
+
+    /** Solves (h + lambda diag(h)) step = -g; empty when the damped matrix is not positive definite. */
+    private static Optional<DMatrixRMaj> dampedStep(DMatrixRMaj h, DMatrixRMaj g, double lambda,
+                                          LinearSolverDense<DMatrixRMaj> solver) {
+        DMatrixRMaj damped = h.copy();
+        for (int k = 0; k < 6; k++) {
+            damped.add(k, k, lambda * h.get(k, k));
+        }
+        if (!solver.setA(damped)) {
+            return Optional.empty();
+        }
+        DMatrixRMaj step = new DMatrixRMaj(6, 1);
+        solver.solve(g, step);
+        CommonOps_DDRM.scale(-1, step);
+        return Optional.of(step);
     }
 
     /** The right update {@code R exp(omega), t + R v}. */

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import georegression.struct.se.Se3_F64;
+import java.util.Arrays;
 import org.junit.jupiter.api.Test;
 
 class ClosureConstraintTest {
@@ -66,6 +67,27 @@ class ClosureConstraintTest {
                 10, 1.5));
         assertThrows(IllegalArgumentException.class, () -> new FrameRef(" ", 0, 0));
         assertThrows(IllegalArgumentException.class, () -> new FrameRef("s", -1, 0));
+    }
+
+    @Test
+    void swappingBlocksTwiceGivesTheOriginalAndMovesRotationLast() {
+        double[] info = new double[36];
+        for (int k = 0; k < 36; k++) {
+            info[k] = k;
+        }
+        double[] swapped = ClosureConstraint.swapRotationAndTranslation(info);
+        assertEquals(info[0], swapped[3 * 6 + 3], 0);
+        assertEquals(info[6 * 1 + 4], swapped[6 * 4 + 1], 0);
+        assertEquals(info[6 * 5 + 5], swapped[6 * 2 + 2], 0);
+        assertEquals(Arrays.toString(info),
+                Arrays.toString(ClosureConstraint.swapRotationAndTranslation(swapped)));
+    }
+
+    @Test
+    void acceptsAMonocularClosureWithoutDirection() {
+        ClosureConstraint m = new ClosureConstraint("m", A, B, pose(0, 0, 0), TwoLapTrajectory.information(0.01, 0.05),
+                false, 40, 0.5);
+        assertTrue(m.hasNoDirection());
     }
 
     @Test

@@ -58,6 +58,30 @@ class LoopCheckTest {
     }
 
     @Test
+    void aMonocularClosureWithoutDirectionIsTestedOnRotationOnly() {
+        TwoLapTrajectory drive = new TwoLapTrajectory(0, 0, 1);
+        int a1 = TwoLapTrajectory.frame(5);
+        int a2 = TwoLapTrajectory.frame(6);
+        int b1 = TwoLapTrajectory.frame(5 + TwoLapTrajectory.LAP_SECONDS);
+        int b2 = TwoLapTrajectory.frame(6 + TwoLapTrajectory.LAP_SECONDS);
+        double[] info = TwoLapTrajectory.information(0.01, 0.03);
+        ClosureConstraint metric = new ClosureConstraint("m", drive.ref(a1), drive.ref(b1), drive.relative(a1, b1),
+                info, true, 50, 0.5);
+        Se3_F64 rotationOnly = drive.relative(a2, b2);
+        rotationOnly.T.setTo(0, 0, 0);
+        Se3_F64 turned = TwoLapTrajectory.rightPerturbed(rotationOnly, new double[]{0, 0.3, 0, 0, 0, 0});
+        LoopCheck check = new LoopCheck(new OdometryStretches(Map.of(TwoLapTrajectory.SEQUENCE,
+                new OdometryTrack(drive.odometry)), ConsistencyConfig.defaults()), ConsistencyConfig.defaults());
+        PairOutcome right = check.test(metric, new ClosureConstraint("r", drive.ref(a2), drive.ref(b2), rotationOnly,
+                info, false, 50, 0.5));
+        assertEquals(PairState.CONSISTENT, right.state());
+        assertEquals(3, right.degreesOfFreedom());
+        PairOutcome wrong = check.test(metric, new ClosureConstraint("w", drive.ref(a2), drive.ref(b2), turned, info,
+                false, 50, 0.5));
+        assertEquals(PairState.CONFLICTING, wrong.state());
+    }
+
+    @Test
     void reversedClosureCarriesItsInformation() {
         TwoLapTrajectory drive = new TwoLapTrajectory(0, 0, 1);
         double[] info = new double[36];
