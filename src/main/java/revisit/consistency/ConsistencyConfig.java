@@ -33,9 +33,9 @@ package revisit.consistency;
  *                                     0.01 .. 0.1; default 0.035 (about 2 deg, common practice for essential-matrix
  *                                     translation from a few dozen inliers)
  * @param maxExactCliqueVertices       largest conflict component searched exactly by branch and bound; larger ones
- *                                     use the greedy heuristic; typical 100 .. 5000; default 2000 (measured: a
- *                                     1004-closure component with 4 planted false closures was solved exactly in one
- *                                     node, under 0.15 s; the node budget bounds harder cases)
+ *                                     use the greedy heuristic; typical 100 .. 5000; default 2000 (measured: the
+ *                                     1004-closure component of ConsistencyCheckBench, 4 planted false closures, was
+ *                                     solved exactly in one branch-and-bound node; the node budget bounds harder cases)
  * @param cliqueNodeBudget             branch-and-bound nodes per component before the best clique so far is returned
  *                                     (then marked not exact); typical 1e5 .. 1e8; default 2,000,000
  * @param inlierCountScale             inlier count at which the geometric part of the confidence reaches 1 - 1/e;

@@ -21,7 +21,7 @@ import revisit.camera.CameraModel;
  * </ul>
  * The result follows the convention of {@link MetricPose}. Both frames are taken with the same camera.
  *
- * <p>Not thread-safe (reusable solvers inside the models are created per call, but use one instance per thread).
+ * <p>Thread-safe: the camera and configuration are immutable and every call builds its own models and solvers.
  */
 public final class MetricPoseEstimator {
 
