@@ -30,6 +30,20 @@ class MetricPoseEstimatorTest {
     }
 
     @Test
+    void bothVariantsWorkThroughLensDistortion() {
+        CameraModel distorted = new CameraModel(320, 240, 260, 262, 0, 158, 121, -0.25, 0.08, 0, 0.001, -0.0005);
+        RenderedBoxRoom room = new RenderedBoxRoom(distorted, TRUTH);
+        MatchedPixels matches = room.matches(120, 0.3, 35);
+        MetricPoseEstimator estimator = new MetricPoseEstimator(distorted, MetricPoseConfig.defaults());
+        for (MetricPoseResult result : new MetricPoseResult[]{
+                estimator.alignWithDepthInBoth(matches, room.depthA, room.depthB),
+                estimator.resectWithDepthInA(matches, room.depthA)}) {
+            double[] error = RenderedBoxRoom.difference(result.pose().orElseThrow().aFromB(), TRUTH);
+            assertTrue(error[0] < 6e-3 && error[1] < 3e-2, "error " + error[0] + " rad, " + error[1] + " m");
+        }
+    }
+
+    @Test
     void alignmentRecoversThePoseDespiteFortyPercentWrongMatches() {
         for (long seed : new long[]{41, 42, 43, 44, 45}) {
             MatchedPixels clean = ROOM.matches(150, 0.5, seed);
