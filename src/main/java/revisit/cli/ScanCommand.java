@@ -70,6 +70,10 @@ final class ScanCommand implements Callable<Integer> {
             + "(default) or stop, keeping what was found.")
     String badFrames;
 
+    @Option(names = "--odometry", paramLabel = "FILE", description = "Odometry trajectory of a sequence for the "
+            + "consistency check, one per sequence in input order (repeatable; docs/FORMAT-trajectory.md).")
+    List<Path> odometry = new ArrayList<>();
+
     @Option(names = "--keep-rejected", description = "Also list candidates that failed verification.")
     boolean keepRejected;
 
@@ -105,10 +109,12 @@ final class ScanCommand implements Callable<Integer> {
             deleteCheckpoint(checkpoint);
         }
         FrameSourceOptions so = FrameSourceOptions.defaults().withStride(stride).withMaxFrames(maxFrames);
-        Scanner scanner = new Scanner(cfg, vocab, cam, new Scanner.Options(keepRejected, Optional.of(checkpoint), so));
+        List<SequenceInput> sequences = SequenceInput.ofAll(inputs);
+        Scanner scanner = new Scanner(cfg, vocab, cam, Scanner.Options.defaults().withKeepRejected(keepRejected)
+                .withCheckpoint(checkpoint).withSourceOptions(so).withOdometry(odometryBySequence(sequences)));
         ScanResult result;
         try (ScanProgress progress = new ScanProgress(!quiet, spec.commandLine().getErr())) {
-            result = scanner.run(inputs.stream().map(SequenceInput::of).toList(), progress);
+            result = scanner.run(sequences, progress);
         }
         ScanOutputs.write(out, result, cfg, trustedOnly);
         var o = spec.commandLine().getOut();
@@ -137,6 +143,21 @@ final class ScanCommand implements Callable<Integer> {
             cfg = cfg.withScan(cfg.scan().withBadFrames(p));
         }
         return cfg;
+    }
+
+    private java.util.Map<String, List<revisit.io.StampedPose>> odometryBySequence(List<SequenceInput> sequences) {
+        if (odometry.isEmpty()) {
+            return java.util.Map.of();
+        }
+        if (odometry.size() != sequences.size()) {
+            throw new BadInputException("--odometry: " + odometry.size() + " trajectories for " + sequences.size()
+                    + " inputs; give one per input, in the same order");
+        }
+        java.util.Map<String, List<revisit.io.StampedPose>> map = new java.util.HashMap<>();
+        for (int i = 0; i < sequences.size(); i++) {
+            map.put(sequences.get(i).name(), revisit.io.TrajectoryFile.read(odometry.get(i)));
+        }
+        return map;
     }
 
     private static void deleteCheckpoint(Path checkpoint) {

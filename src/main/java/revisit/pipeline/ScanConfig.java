@@ -1,5 +1,6 @@
 package revisit.pipeline;
 
+import revisit.consistency.ConsistencyConfig;
 import revisit.features.FeatureConfig;
 import revisit.index.IndexConfig;
 import revisit.verification.VerificationConfig;
@@ -11,13 +12,14 @@ import revisit.verification.VerificationConfig;
  * @param features     feature extraction
  * @param index        revisit database and candidate selection
  * @param verification geometric verification
+ * @param consistency  closure-versus-closure checks before export
  * @param scan         the scan itself
  */
 public record ScanConfig(FeatureConfig features, IndexConfig index, VerificationConfig verification,
-                         ScanSettings scan) {
+                         ConsistencyConfig consistency, ScanSettings scan) {
 
     public ScanConfig {
-        if (features == null || index == null || verification == null || scan == null) {
+        if (features == null || index == null || verification == null || consistency == null || scan == null) {
             throw new IllegalArgumentException("every section of the scan configuration must be given");
         }
     }
@@ -25,22 +27,26 @@ public record ScanConfig(FeatureConfig features, IndexConfig index, Verification
     /** All defaults. */
     public static ScanConfig defaults() {
         return new ScanConfig(FeatureConfig.defaults(), IndexConfig.defaults(), VerificationConfig.defaults(),
-                ScanSettings.defaults());
+                ConsistencyConfig.defaults(), ScanSettings.defaults());
     }
 
     public ScanConfig withFeatures(FeatureConfig v) {
-        return new ScanConfig(v, index, verification, scan);
+        return new ScanConfig(v, index, verification, consistency, scan);
     }
 
     public ScanConfig withIndex(IndexConfig v) {
-        return new ScanConfig(features, v, verification, scan);
+        return new ScanConfig(features, v, verification, consistency, scan);
     }
 
     public ScanConfig withVerification(VerificationConfig v) {
-        return new ScanConfig(features, index, v, scan);
+        return new ScanConfig(features, index, v, consistency, scan);
+    }
+
+    public ScanConfig withConsistency(ConsistencyConfig v) {
+        return new ScanConfig(features, index, verification, v, scan);
     }
 
     public ScanConfig withScan(ScanSettings v) {
-        return new ScanConfig(features, index, verification, v);
+        return new ScanConfig(features, index, verification, consistency, v);
     }
 }

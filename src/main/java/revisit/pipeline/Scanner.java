@@ -21,6 +21,7 @@ import revisit.io.Frame;
 import revisit.io.FrameSource;
 import revisit.io.FrameSourceOptions;
 import revisit.io.FrameSources;
+import revisit.io.StampedPose;
 import revisit.vocabulary.Vocabulary;
 
 /**
@@ -43,12 +44,34 @@ public final class Scanner {
      * @param checkpoint     checkpoint file, or empty for none
      * @param sourceOptions  stride, frame limit and start time applied to every sequence (its frame rate is
      *                       replaced by {@link ScanSettings#frameRateHz()})
+     * @param odometry       odometry trajectory per sequence name for the consistency check; empty for none
      */
-    public record Options(boolean keepRejected, Optional<Path> checkpoint, FrameSourceOptions sourceOptions) {
+    public record Options(boolean keepRejected, Optional<Path> checkpoint, FrameSourceOptions sourceOptions,
+                          Map<String, List<StampedPose>> odometry) {
 
-        /** No rejected candidates, no checkpoint, every frame. */
+        public Options {
+            odometry = Map.copyOf(odometry);
+        }
+
+        /** No rejected candidates, no checkpoint, every frame, no odometry. */
         public static Options defaults() {
-            return new Options(false, Optional.empty(), FrameSourceOptions.defaults());
+            return new Options(false, Optional.empty(), FrameSourceOptions.defaults(), Map.of());
+        }
+
+        public Options withKeepRejected(boolean v) {
+            return new Options(v, checkpoint, sourceOptions, odometry);
+        }
+
+        public Options withCheckpoint(Path v) {
+            return new Options(keepRejected, Optional.of(v), sourceOptions, odometry);
+        }
+
+        public Options withSourceOptions(FrameSourceOptions v) {
+            return new Options(keepRejected, checkpoint, v, odometry);
+        }
+
+        public Options withOdometry(Map<String, List<StampedPose>> v) {
+            return new Options(keepRejected, checkpoint, sourceOptions, v);
         }
     }
 
@@ -95,7 +118,9 @@ public final class Scanner {
                 stop = scanSequence(s, inputs.get(s), lastDone.getOrDefault(s, -1), pool, step, cache, times,
                         skipped, listener);
             }
-            return new ScanResult(step.closures(), step.traces(), List.copyOf(inputs), List.copyOf(skipped), times,
+            List<Closure> checked = ClosureChecks.apply(step.closures(),
+                    inputs.stream().map(SequenceInput::name).toList(), options.odometry(), config.consistency());
+            return new ScanResult(checked, step.traces(), List.copyOf(inputs), List.copyOf(skipped), times,
                     recovered.size(), stop);
         } finally {
             pool.shutdownNow();

@@ -16,7 +16,6 @@ import org.junit.jupiter.api.Test;
 import revisit.camera.CameraModel;
 import revisit.evaluation.KrtCameraFile;
 import revisit.evaluation.KrtView;
-import revisit.io.FrameSourceOptions;
 
 /**
  * End-to-end scan of the Middlebury dino ring (Seitz, Curless, Diebel, Scharstein, Szeliski, CVPR 2006;
@@ -39,8 +38,7 @@ class ScannerDinoRingTest {
         ScanConfig cfg = ScanConfig.defaults();
         // 48 frames at the default 10 Hz last 4.8 s: exclude by frame count instead (a quarter of the ring).
         cfg = cfg.withIndex(cfg.index().withExclusionSeconds(0).withExclusionFrames(12));
-        ScanResult r = new Scanner(cfg, TestVocabulary.small(), Optional.of(cam), new Scanner.Options(false,
-                Optional.empty(), FrameSourceOptions.defaults())).run(List.of(SequenceInput.of(ring)),
+        ScanResult r = new Scanner(cfg, TestVocabulary.small(), Optional.of(cam), Scanner.Options.defaults()).run(List.of(SequenceInput.of(ring)),
                 ScanListener.silent());
 
         boolean ringClosed = false;
