@@ -90,6 +90,14 @@ class VocabTrainCommandTest {
     }
 
     @Test
+    void shippedVocabularyWasTrainedOnTheDefaultDescriptor() {
+        // Changing FeatureConfig defaults (pattern seed, angle bins, blur) invalidates vocab/default.rvoc: retrain
+        // it with the recipe in vocab/README.md.
+        Vocabulary v = VocabularyFile.read(Path.of(System.getProperty("user.dir")).resolve("vocab/default.rvoc"));
+        assertEquals(VocabTrainCommand.descriptorKind(FeatureConfig.defaults()), v.descriptorKind());
+    }
+
+    @Test
     void reportsAMissingInputInOneLine() {
         StringWriter err = new StringWriter();
         int code = run(new StringWriter(), err, "vocab-train", dir.resolve("nowhere").toString(), "-o",
