@@ -7,8 +7,14 @@ import picocli.CommandLine.Command;
 @Command(name = "revisit", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Finds where a camera sequence revisits a place, proves each revisit geometrically and "
                 + "exports verified closures for pose-graph optimizers.",
-        subcommands = {CommandLine.HelpCommand.class, FeaturesCommand.class, VocabInfoCommand.class, EvaluateCommand.class, TuneCommand.class,
-                ScanCommand.class})
+        subcommands = {
+                CommandLine.HelpCommand.class,
+                ScanCommand.class,
+                EvaluateCommand.class,
+                TuneCommand.class,
+                VocabTrainCommand.class,
+                VocabInfoCommand.class,
+                FeaturesCommand.class})
 public final class RevisitCommand implements Runnable {
 
     @CommandLine.Spec

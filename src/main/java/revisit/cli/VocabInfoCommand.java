@@ -38,8 +38,10 @@ final class VocabInfoCommand implements Callable<Integer> {
     }
 
     static void print(PrintWriter out, Path file, long bytes, VocabularySummary s) {
-        out.printf(Locale.ROOT, "vocabulary   %s (%.1f MB)%n", file, bytes / 1e6);
-        out.printf(Locale.ROOT, "descriptor   %s, 256 bits%n", s.descriptorKind());
+        String size = bytes >= 1_000_000 ? String.format(Locale.ROOT, "%.1f MB", bytes / 1e6)
+                : String.format(Locale.ROOT, "%.1f kB", bytes / 1e3);
+        out.printf(Locale.ROOT, "vocabulary   %s (%s)%n", file, size);
+        out.printf(Locale.ROOT, "descriptor   %s%n", s.descriptorKind());
         out.printf(Locale.ROOT, "tree         branching k = %d, depth L = %d, %d nodes, leaves at depth %d..%d%n",
                 s.branching(), s.depth(), s.nodeCount(), s.minLeafDepth(), s.maxLeafDepth());
         out.printf(Locale.ROOT, "words        %d of %d possible (%.1f%%)%n", s.wordCount(), s.fullTreeWords(),

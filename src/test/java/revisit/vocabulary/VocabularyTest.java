@@ -5,9 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import revisit.features.FrameFeatures;
@@ -99,6 +103,32 @@ class VocabularyTest {
                 assertEquals(bfsId.get(ancestor), nodes[q], "query " + q + " level " + level);
                 assertEquals(Math.min(level, leaf.depth), vocabulary.nodeDepth(nodes[q]));
             }
+        }
+    }
+
+    @Test
+    void concurrentLookupsAgreeWithSequentialOnes() throws Exception {
+        long[] queries = SyntheticDescriptors.random(5000, 9);
+        int[] expected = new int[5000];
+        for (int q = 0; q < 5000; q++) {
+            expected[q] = vocabulary.word(queries, q);
+        }
+        ExecutorService pool = Executors.newFixedThreadPool(4);
+        try {
+            List<Future<int[]>> results = new ArrayList<>();
+            for (int t = 0; t < 4; t++) {
+                results.add(pool.submit(() -> {
+                    int[] words = new int[5000];
+                    int[] nodes = new int[5000];
+                    vocabulary.lookup(frame(queries, 5000), 2, words, nodes);
+                    return words;
+                }));
+            }
+            for (Future<int[]> r : results) {
+                assertArrayEquals(expected, r.get());
+            }
+        } finally {
+            pool.shutdown();
         }
     }
 
