@@ -16,7 +16,8 @@ import revisit.camera.CameraModel;
  * @param rateHz            frames per second, 1 to 100 (default 10, a usual keyframe rate for place recognition)
  * @param noiseSigma        standard deviation of sensor noise, grey levels of 255, 0 to 20 (default 2, a clean
  *                          industrial camera in daylight; common practice)
- * @param shutterSeconds    exposure time that smears motion into blur, seconds, 0 to 0.1 (default 0.012)
+ * @param shutterSeconds    exposure time that smears motion into blur, seconds, 0 to 0.1 (default 0.008, a
+ *                          daylight exposure; chosen here)
  * @param defocusFraction   fraction of frames rendered out of focus, 0 to 1 (default 0.04)
  * @param exposureVariation amplitude of slow auto-exposure drift as a relative gain, 0 to 0.5 (default 0.15)
  * @param occluderCount     people and carts walking the yard, 0 to 8 (default 4)
@@ -54,7 +55,7 @@ public record ScenarioConfig(long seed, int frameCount, int loopCount, int width
 
     /** Full-size defaults: 1000 + 500 frames at 640x480 with every nuisance on. */
     public static ScenarioConfig defaults() {
-        return new ScenarioConfig(7, 1000, 2, 640, 480, 10, 2.0, 0.012, 0.04, 0.15, 4, true, true, true, true);
+        return new ScenarioConfig(7, 1000, 2, 640, 480, 10, 2.0, 0.008, 0.04, 0.15, 4, true, true, true, true);
     }
 
     /** A small scenario for the demo and tests: 240 + 120 frames at 320x240, same world and nuisances. */
@@ -89,6 +90,11 @@ public record ScenarioConfig(long seed, int frameCount, int loopCount, int width
 
     public ScenarioConfig withLoopCount(int v) {
         return new ScenarioConfig(seed, frameCount, v, width, height, rateHz, noiseSigma, shutterSeconds,
+                defocusFraction, exposureVariation, occluderCount, secondSession, twinPlace, distortion, photoPosters);
+    }
+
+    public ScenarioConfig withRateHz(double v) {
+        return new ScenarioConfig(seed, frameCount, loopCount, width, height, v, noiseSigma, shutterSeconds,
                 defocusFraction, exposureVariation, occluderCount, secondSession, twinPlace, distortion, photoPosters);
     }
 
