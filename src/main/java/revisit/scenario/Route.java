@@ -11,7 +11,7 @@ import revisit.io.StampedPose;
  * camera at a place's facade while passing it. Poses are a smooth function of time, so frames at 10 Hz and
  * motion-blur sub-instants come from the same formula.
  */
-final class Route {
+public final class Route {
 
     /** Camera height above the floor, metres (hand-held or cart-mounted camera; chosen here). */
     static final double EYE_HEIGHT = 1.5;
@@ -51,13 +51,18 @@ final class Route {
         return path;
     }
 
+    /** Length of the route, metres. */
+    public double lengthMetres() {
+        return path.length();
+    }
+
     /** Walking speed, metres per second. */
-    double speed() {
+    public double speed() {
         return speed;
     }
 
     /** Head turn at arc position s, radians (positive = left). */
-    double glanceAt(double s) {
+    public double glanceAt(double s) {
         double yaw = 0;
         for (Glance g : glances) {
             double d = Math.abs(s - g.s()) - GLANCE_PLATEAU;
@@ -71,7 +76,7 @@ final class Route {
     }
 
     /** Camera to world at time t seconds (world x east, y north, z up; camera x right, y down, z forward). */
-    Se3_F64 poseAt(double t) {
+    public Se3_F64 poseAt(double t) {
         double s = speed * t;
         double[] p = path.at(s);
         double yaw = p[2] + glanceAt(s) + Math.toRadians(1.5) * Math.sin(2 * Math.PI * 0.23 * t + phases[0]);
@@ -105,7 +110,7 @@ final class Route {
     }
 
     /** The stamped pose of frame i at the given rate. */
-    StampedPose frame(int i, double rateHz) {
+    public StampedPose frame(int i, double rateHz) {
         double t = i / rateHz;
         return StampedPose.of(t, poseAt(t));
     }

@@ -40,7 +40,7 @@ final class ScenarioManifest {
                     .put("depthFolder", ses.name() + "/" + ScenarioWriter.DEPTH)
                     .put("depthPattern", ScenarioWriter.DEPTH_PATTERN)
                     .put("poses", ses.name() + "/" + ScenarioWriter.POSES)
-                    .put("routeLengthM", round(ses.route().path().length()))
+                    .put("routeLengthM", round(ses.route().lengthMetres()))
                     .put("speedMetresPerSecond", round(ses.route().speed()));
             o.set("lighting", JSON.valueToTree(ses.lighting()));
         }
