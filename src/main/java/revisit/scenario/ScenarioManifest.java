@@ -37,6 +37,7 @@ final class ScenarioManifest {
             o.put("name", ses.name()).put("frames", ses.frameCount()).put("rateHz", ses.rateHz())
                     .put("framesFolder", ses.name() + "/" + ScenarioWriter.FRAMES)
                     .put("framePattern", ScenarioWriter.FRAME_PATTERN)
+                    .put("frameList", ses.name() + "/" + ScenarioWriter.FRAME_LIST)
                     .put("depthFolder", ses.name() + "/" + ScenarioWriter.DEPTH)
                     .put("depthPattern", ScenarioWriter.DEPTH_PATTERN)
                     .put("poses", ses.name() + "/" + ScenarioWriter.POSES)

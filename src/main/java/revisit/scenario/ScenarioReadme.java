@@ -25,25 +25,28 @@ final class ScenarioReadme {
         for (Session ses : s.sessions()) {
             b.append(String.format(Locale.ROOT, "  %-20s%d frames at %.0f Hz, %s%n", ses.name() + "/"
                     + ScenarioWriter.FRAMES + "/", ses.frameCount(), ses.rateHz(), lightingWords(ses)));
+            b.append(String.format(Locale.ROOT, "  %-20sframe list: time stamp and image of every frame%n",
+                    ses.name() + "/" + ScenarioWriter.FRAME_LIST));
             b.append(String.format(Locale.ROOT, "  %-20s16-bit PNG z-depth in millimetres (0 = sky)%n",
                     ses.name() + "/" + ScenarioWriter.DEPTH + "/"));
             b.append(String.format(Locale.ROOT, "  %-20sground-truth poses (revisit-trajectory format)%n",
                     ses.name() + "/" + ScenarioWriter.POSES));
         }
         b.append("\nFrames are 8-bit grey PNG, ").append(c.width()).append("x").append(c.height())
-                .append(", named frame_00000.png, frame_00001.png, ... in time order (frame i is at i / rate\n")
-                .append("seconds in its session's poses file). Poses are camera-to-world; world axes x east, y north,\n")
-                .append("z up in metres; camera axes x right, y down, z forward.\n\n");
+                .append(", named frame_00000.png, frame_00001.png, ... in time order;\n")
+                .append("frame i is at i / rate seconds, the time on line i of the poses file and the frame list.\n")
+                .append("Poses are camera-to-world; world axes x east, y north, z up, metres;\n")
+                .append("camera axes x right, y down, z forward.\n\n");
         b.append("Planted revisits: ").append(s.revisits().size()).append(" pairs of visits to the same place (")
                 .append(count(s, "same-heading")).append(" same heading, ").append(count(s, "oblique"))
                 .append(" oblique, ").append(count(s, "opposite")).append(" opposite direction).\n");
         if (!s.decoys().isEmpty()) {
-            b.append("Twin decoys: ").append(s.decoys().size()).append(" pairs of visits to two kiosks that look\n")
-                    .append("identical but stand ").append(Math.round(s.decoys().get(0).distanceM()))
+            b.append("Twin decoys: ").append(s.decoys().size()).append(" pairs of visits to two kiosks that look ")
+                    .append("identical\nbut stand ").append(Math.round(s.decoys().get(0).distanceM()))
                     .append(" m apart; a closure between them is false.\n");
         }
         b.append("Nuisances: sensor noise sigma ").append(c.noiseSigma()).append(" grey levels, shutter ")
-                .append(c.shutterSeconds()).append(" s (motion blur), ").append(Math.round(c.defocusFraction() * 100))
+                .append(c.shutterSeconds()).append(" s (motion blur),\n").append(Math.round(c.defocusFraction() * 100))
                 .append("% of frames defocused, exposure drift +-").append(Math.round(c.exposureVariation() * 100))
                 .append("%, ").append(c.occluderCount()).append(" walkers.\n");
         photoCredits(s, b);

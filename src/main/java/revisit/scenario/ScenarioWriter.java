@@ -15,12 +15,13 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.Stream;
 import revisit.camera.CameraFile;
 import revisit.io.BadInputException;
+import revisit.io.FrameListFile;
 import revisit.io.StampedPose;
 import revisit.io.TrajectoryFile;
 
 /**
- * Writes a scenario into a folder: README.txt, manifest.json, camera.json and per session the frames, the depth
- * images and the ground-truth poses. Every file is written atomically; frames are rendered on several threads,
+ * Writes a scenario into a folder: README.txt, manifest.json, camera.json and per session the frames, a frame
+ * list with their time stamps (docs/FORMAT-frames.md), the depth images and the ground-truth poses. Every file is written atomically; frames are rendered on several threads,
  * thread k taking frames k, k + n, k + 2n, ..., with identical bytes whatever the thread count.
  */
 public final class ScenarioWriter {
@@ -29,6 +30,7 @@ public final class ScenarioWriter {
     static final String FRAMES = "frames";
     static final String DEPTH = "depth";
     static final String POSES = "poses.txt";
+    static final String FRAME_LIST = "frames.txt";
     static final String FRAME_PATTERN = "frame_%05d.png";
     static final String DEPTH_PATTERN = "depth_%05d.png";
 
@@ -71,6 +73,13 @@ public final class ScenarioWriter {
             removeStale(folder.resolve("session2"), 0);
         }
         renderAll(s, folder, threads, progress);
+        for (Session ses : s.sessions()) {
+            List<FrameListFile.Entry> entries = new ArrayList<>(ses.frameCount());
+            for (int i = 0; i < ses.frameCount(); i++) {
+                entries.add(new FrameListFile.Entry(ses.time(i), framePath(folder, ses, i)));
+            }
+            FrameListFile.write(folder.resolve(ses.name()).resolve(FRAME_LIST), entries);
+        }
         revisit.io.AtomicFiles.writeString(folder.resolve("manifest.json"), ScenarioManifest.toJson(s));
         revisit.io.AtomicFiles.writeString(folder.resolve("README.txt"), ScenarioReadme.text(s));
     }

@@ -19,6 +19,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import revisit.camera.CameraFile;
 import revisit.io.BadInputException;
+import revisit.io.FrameListFile;
 import revisit.io.StampedPose;
 import revisit.io.TrajectoryFile;
 
@@ -41,7 +42,8 @@ class ScenarioWriterTest {
         ScenarioWriter.write(Scenario.build(TINY), dir.resolve("b"), false, 2, (d, t) -> { });
         List<Path> a = files(dir.resolve("a"));
         assertEquals(a, files(dir.resolve("b")));
-        assertEquals(3 + (2 * 24 + 1) + (2 * 20 + 1), a.size(), "README, manifest, camera and per session frames, depths, poses");
+        assertEquals(3 + (2 * 24 + 2) + (2 * 20 + 2), a.size(),
+                "README, manifest, camera and per session frames, depths, poses, frame list");
         for (Path p : a) {
             assertArrayEquals(Files.readAllBytes(dir.resolve("a").resolve(p)),
                     Files.readAllBytes(dir.resolve("b").resolve(p)), p.toString());
@@ -77,6 +79,12 @@ class ScenarioWriterTest {
         assertEquals(24, poses.size());
         assertEquals(ses.route().frame(7, 1.5).x(), poses.get(7).x(), 1e-6);
         assertEquals(s.camera(), CameraFile.read(dir.resolve("camera.json")));
+        List<FrameListFile.Entry> list = FrameListFile.read(dir.resolve("session1/frames.txt"));
+        assertEquals(24, list.size());
+        for (int i = 0; i < 24; i++) {
+            assertEquals(poses.get(i).timeSeconds(), list.get(i).timeSeconds(), 1e-6, "time of frame " + i);
+            assertEquals(ScenarioWriter.framePath(dir, ses, i).toAbsolutePath().normalize(), list.get(i).image());
+        }
         RenderedFrame f = new FrameMaker(s).make(0, 5);
         BufferedImage depth = ImageIO.read(ScenarioWriter.depthPath(dir, ses, 5).toFile());
         assertEquals(BufferedImage.TYPE_USHORT_GRAY, depth.getType());
