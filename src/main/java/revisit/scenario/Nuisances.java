@@ -85,15 +85,23 @@ final class Nuisances {
         int iy = (int) Math.floor(sy);
         float fx = (float) (sx - ix);
         float fy = (float) (sy - iy);
+        int[] left = new int[w];
+        int[] right = new int[w];
+        for (int x = 0; x < w; x++) {
+            left[x] = Math.max(0, Math.min(w - 1, x + ix));
+            right[x] = Math.max(0, Math.min(w - 1, x + ix + 1));
+        }
         for (int y = 0; y < h; y++) {
             int y0 = Math.max(0, Math.min(h - 1, y + iy)) * w;
             int y1 = Math.max(0, Math.min(h - 1, y + iy + 1)) * w;
+            int row = y * w;
             for (int x = 0; x < w; x++) {
-                int x0 = Math.max(0, Math.min(w - 1, x + ix));
-                int x1 = Math.max(0, Math.min(w - 1, x + ix + 1));
-                float top = src[y0 + x0] + fx * (src[y0 + x1] - src[y0 + x0]);
-                float bottom = src[y1 + x0] + fx * (src[y1 + x1] - src[y1 + x0]);
-                acc[y * w + x] += weight * (top + fy * (bottom - top));
+                float a = src[y0 + left[x]];
+                float b = src[y0 + right[x]];
+                float c = src[y1 + left[x]];
+                float d = src[y1 + right[x]];
+                float top = a + fx * (b - a);
+                acc[row + x] += weight * (top + fy * (c + fx * (d - c) - top));
             }
         }
     }

@@ -29,6 +29,9 @@ class ScenarioWriterTest {
     static final ScenarioConfig TINY = ScenarioConfig.small().withSize(160, 120).withLoopCount(1)
             .withFrameCount(24).withRateHz(1.5);
 
+    /** Built once: a scenario is immutable and painting its textures is the slow part. */
+    private static final Scenario BUILT = Scenario.build(TINY);
+
     private static List<Path> files(Path root) throws IOException {
         try (Stream<Path> walk = Files.walk(root)) {
             return walk.filter(Files::isRegularFile).map(root::relativize).sorted().toList();
@@ -37,8 +40,7 @@ class ScenarioWriterTest {
 
     @Test
     void sameSeedGivesIdenticalBytesWithOneOrTwoThreads(@TempDir Path dir) throws IOException {
-        Scenario s = Scenario.build(TINY);
-        ScenarioWriter.write(s, dir.resolve("a"), false, 1, (d, t) -> { });
+        ScenarioWriter.write(BUILT, dir.resolve("a"), false, 1, (d, t) -> { });
         ScenarioWriter.write(Scenario.build(TINY), dir.resolve("b"), false, 2, (d, t) -> { });
         List<Path> a = files(dir.resolve("a"));
         assertEquals(a, files(dir.resolve("b")));
@@ -56,7 +58,7 @@ class ScenarioWriterTest {
 
     @Test
     void framesInAnyOrderEqualFramesInSequence() {
-        Scenario s = Scenario.build(TINY);
+        Scenario s = BUILT;
         FrameMaker forward = new FrameMaker(s);
         FrameMaker backward = new FrameMaker(s);
         RenderedFrame[] seen = new RenderedFrame[20];
@@ -72,7 +74,7 @@ class ScenarioWriterTest {
 
     @Test
     void writtenFilesReadBackAsPosesCameraDepthAndManifest(@TempDir Path dir) throws IOException {
-        Scenario s = Scenario.build(TINY);
+        Scenario s = BUILT;
         ScenarioWriter.write(s, dir, false, 2, (d, t) -> { });
         Session ses = s.sessions().get(0);
         List<StampedPose> poses = TrajectoryFile.read(dir.resolve("session1/poses.txt"));
@@ -105,7 +107,7 @@ class ScenarioWriterTest {
     void refusesNonEmptyFolderUnlessOverwriteAndThenRemovesStaleFrames(@TempDir Path dir) throws IOException {
         Files.writeString(dir.resolve("notes.txt"), "mine");
         BadInputException e = assertThrows(BadInputException.class,
-                () -> ScenarioWriter.write(Scenario.build(TINY), dir, false, 1, (d, t) -> { }));
+                () -> ScenarioWriter.write(BUILT, dir, false, 1, (d, t) -> { }));
         assertTrue(e.getMessage().contains("not empty") && e.getMessage().contains("--overwrite"), e.getMessage());
         Path stale = dir.resolve("session1/frames/frame_00050.png");
         Files.createDirectories(stale.getParent());
