@@ -3,11 +3,13 @@ package revisit.bench;
 import com.sun.management.OperatingSystemMXBean;
 import java.io.IOException;
 import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.Locale;
 import java.util.stream.Stream;
+import revisit.scenario.FrameMaker;
 import revisit.scenario.Scenario;
 import revisit.scenario.ScenarioConfig;
 import revisit.scenario.ScenarioWriter;
@@ -16,6 +18,7 @@ import revisit.scenario.ScenarioWriter;
  * Times writing the default first session (1000 frames at 640x480 with every nuisance, PNG frames and 16-bit
  * depth PNGs) with 2 threads, and prints wall time and process CPU time. On a shared machine the wall time
  * includes waiting for other jobs; CPU time / 2 is the wall time on 2 otherwise idle cores.
+ * With the argument {@code render} it prints instead the thread CPU time of rendering one frame (no writing).
  * Run: {@code mvn -B -Pbench -DskipTests package && java -cp target/benchmarks.jar revisit.bench.ScenarioTiming}
  */
 public final class ScenarioTiming {
@@ -24,6 +27,11 @@ public final class ScenarioTiming {
     }
 
     public static void main(String[] args) throws IOException {
+        if (args.length > 0 && args[0].equals("render")) {
+            renderOnly(ScenarioConfig.defaults());
+            renderOnly(ScenarioConfig.defaults().withoutNuisances());
+            return;
+        }
         int frames = args.length > 0 ? Integer.parseInt(args[0]) : 1000;
         OperatingSystemMXBean os = (OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean();
         long cpu0 = os.getProcessCpuTime();
@@ -48,5 +56,23 @@ public final class ScenarioTiming {
                 }
             }
         }
+    }
+
+    /** Thread CPU time per frame of rendering alone (one thread, after 30 warm-up frames). */
+    private static void renderOnly(ScenarioConfig config) {
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        FrameMaker maker = new FrameMaker(Scenario.build(config));
+        for (int i = 0; i < 30; i++) {
+            maker.make(0, i * 30);
+        }
+        long cpu0 = threads.getCurrentThreadCpuTime();
+        int n = 100;
+        long sink = 0;
+        for (int i = 0; i < n; i++) {
+            sink += maker.make(0, (i * 9) % 1000).grey()[0];
+        }
+        System.out.printf(Locale.ROOT, "render one frame 640x480 (%s): %.1f ms thread cpu (checksum %d)%n",
+                config.noiseSigma() > 0 ? "all nuisances" : "clean",
+                (threads.getCurrentThreadCpuTime() - cpu0) / 1e6 / n, sink);
     }
 }
