@@ -130,7 +130,8 @@ final class Motifs {
             double r = Math.min(w, h) * (0.06 + rnd.nextDouble() * 0.1);
             double cx = x0 + r + rnd.nextDouble() * (w - 2 * r);
             double cy = y0 + r + rnd.nextDouble() * (h - 2 * r);
-            float v = rnd.nextBoolean() ? 0.05f + (float) rnd.nextDouble() * 0.2f : 0.8f + (float) rnd.nextDouble() * 0.2f;
+            float v = rnd.nextBoolean() ? 0.05f + (float) rnd.nextDouble() * 0.2f
+                    : 0.8f + (float) rnd.nextDouble() * 0.2f;
             switch (rnd.nextInt(4)) {
                 case 0 -> c.disc(cx, cy, r, v);
                 case 1 -> c.shape(cx - r, cy - r, cx + r, cy + r,

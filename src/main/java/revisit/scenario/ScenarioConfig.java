@@ -8,7 +8,7 @@ import revisit.camera.CameraModel;
  *
  * @param seed              seeds textures, layout details, sway, walkers and nuisances; any value (default 7)
  * @param frameCount        frames of the first session; the second session has half as many; 20 to 100000
- *                          (default 1000, chosen here so a walk of the yard runs at about 1.1 m/s)
+ *                          (default 1000, chosen here so the walk runs at about 1.2 m/s)
  * @param loopCount         1 = one lap of the yard ring; 2 = a lap, then across the yard and a lap in the opposite
  *                          direction (revisits from the opposite and oblique headings); default 2
  * @param width             image width, pixels, 64 to 4096 (default 640, common VGA size)
@@ -49,7 +49,8 @@ public record ScenarioConfig(long seed, int frameCount, int loopCount, int width
 
     private static void check(boolean ok, String name, double value, String range) {
         if (!ok) {
-            throw new IllegalArgumentException("scenario " + name + " " + value + " is out of range, expected " + range);
+            throw new IllegalArgumentException("scenario " + name + " " + value + " is out of range, expected "
+                    + range);
         }
     }
 

@@ -31,7 +31,22 @@ final class ScenarioManifest {
         root.put("camera", ScenarioWriter.CAMERA_FILE);
         root.putObject("depth").put("encoding", "16-bit grey PNG").put("kind", "z-depth along the optical axis")
                 .put("unit", "millimetre").put("metresPerUnit", 0.001).put("zeroMeans", "no surface (sky)");
-        ArrayNode sessions = root.putArray("sessions");
+        sessions(s, root.putArray("sessions"));
+        ArrayNode places = root.putArray("places");
+        s.world().places().forEach(p -> places.add(JSON.valueToTree(p)));
+        ArrayNode visits = root.putArray("visits");
+        s.visits().forEach(v -> visits.add(visit(s, v)));
+        plantedPairs(s, root);
+        ArrayNode photos = root.putArray("photoCredits");
+        s.world().photoCredits().forEach(photos::add);
+        try {
+            return JSON.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("scenario manifest could not be formed", e);
+        }
+    }
+
+    private static void sessions(Scenario s, ArrayNode sessions) {
         for (Session ses : s.sessions()) {
             ObjectNode o = sessions.addObject();
             o.put("name", ses.name()).put("frames", ses.frameCount()).put("rateHz", ses.rateHz())
@@ -45,12 +60,9 @@ final class ScenarioManifest {
                     .put("speedMetresPerSecond", round(ses.route().speed()));
             o.set("lighting", JSON.valueToTree(ses.lighting()));
         }
-        ArrayNode places = root.putArray("places");
-        for (Place p : s.world().places()) {
-            places.add(JSON.valueToTree(p));
-        }
-        ArrayNode visits = root.putArray("visits");
-        s.visits().forEach(v -> visits.add(visit(s, v)));
+    }
+
+    private static void plantedPairs(Scenario s, ObjectNode root) {
         ArrayNode revisits = root.putArray("revisits");
         for (PlantedRevisit r : s.revisits()) {
             ObjectNode o = revisits.addObject();
@@ -65,13 +77,6 @@ final class ScenarioManifest {
             o.put("group", d.group()).put("distanceM", round(d.distanceM()));
             o.set("first", visit(s, d.first()));
             o.set("second", visit(s, d.second()));
-        }
-        ArrayNode photos = root.putArray("photoCredits");
-        s.world().photoCredits().forEach(photos::add);
-        try {
-            return JSON.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("scenario manifest could not be formed", e);
         }
     }
 

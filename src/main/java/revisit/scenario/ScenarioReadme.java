@@ -18,23 +18,10 @@ final class ScenarioReadme {
                 .append("four pillars, two kiosks and people and carts walking about. Nothing is taken from a real\n")
                 .append("place or a published dataset. Because the world is known exactly, so are the camera poses,\n")
                 .append("the depth of every pixel and every place the camera comes back to.\n\n");
-        b.append("Contents\n");
-        b.append("  manifest.json       settings, places, planted visits, revisits and twin decoys (machine-readable)\n");
-        b.append("  ").append(String.format(Locale.ROOT, "%-20s", ScenarioWriter.CAMERA_FILE))
-                .append("camera intrinsics and distortion (revisit-camera format)\n");
-        for (Session ses : s.sessions()) {
-            b.append(String.format(Locale.ROOT, "  %-20s%d frames at %.0f Hz, %s%n", ses.name() + "/"
-                    + ScenarioWriter.FRAMES + "/", ses.frameCount(), ses.rateHz(), lightingWords(ses)));
-            b.append(String.format(Locale.ROOT, "  %-20sframe list: time stamp and image of every frame%n",
-                    ses.name() + "/" + ScenarioWriter.FRAME_LIST));
-            b.append(String.format(Locale.ROOT, "  %-20s16-bit PNG z-depth in millimetres (0 = sky)%n",
-                    ses.name() + "/" + ScenarioWriter.DEPTH + "/"));
-            b.append(String.format(Locale.ROOT, "  %-20sground-truth poses (revisit-trajectory format)%n",
-                    ses.name() + "/" + ScenarioWriter.POSES));
-        }
+        contents(s, b);
         b.append("\nFrames are 8-bit grey PNG, ").append(c.width()).append("x").append(c.height())
                 .append(", named frame_00000.png, frame_00001.png, ... in time order;\n")
-                .append("frame i is at i / rate seconds, the time on line i of the poses file and the frame list.\n")
+                .append("frame i is at i / rate seconds, the time of the i-th pose and of the i-th frame-list entry.\n")
                 .append("Poses are camera-to-world; world axes x east, y north, z up, metres;\n")
                 .append("camera axes x right, y down, z forward.\n\n");
         b.append("Planted revisits: ").append(s.revisits().size()).append(" pairs of visits to the same place (")
@@ -53,6 +40,23 @@ final class ScenarioReadme {
         b.append("\nThe same settings (\"config\" in manifest.json) and generator version give the same files,\n")
                 .append("byte for byte.\n");
         return b.toString();
+    }
+
+    private static void contents(Scenario s, StringBuilder b) {
+        b.append("Contents\n");
+        b.append("  manifest.json       settings, places, planted visits, revisits and twin decoys\n");
+        b.append("  ").append(String.format(Locale.ROOT, "%-20s", ScenarioWriter.CAMERA_FILE))
+                .append("camera intrinsics and distortion (revisit-camera format)\n");
+        for (Session ses : s.sessions()) {
+            b.append(String.format(Locale.ROOT, "  %-20s%d frames at %.0f Hz, %s%n", ses.name() + "/"
+                    + ScenarioWriter.FRAMES + "/", ses.frameCount(), ses.rateHz(), lightingWords(ses)));
+            b.append(String.format(Locale.ROOT, "  %-20sframe list: time stamp and image of every frame%n",
+                    ses.name() + "/" + ScenarioWriter.FRAME_LIST));
+            b.append(String.format(Locale.ROOT, "  %-20s16-bit PNG z-depth in millimetres (0 = sky)%n",
+                    ses.name() + "/" + ScenarioWriter.DEPTH + "/"));
+            b.append(String.format(Locale.ROOT, "  %-20sground-truth poses (revisit-trajectory format)%n",
+                    ses.name() + "/" + ScenarioWriter.POSES));
+        }
     }
 
     private static void photoCredits(Scenario s, StringBuilder b) {

@@ -21,8 +21,9 @@ import revisit.io.TrajectoryFile;
 
 /**
  * Writes a scenario into a folder: README.txt, manifest.json, camera.json and per session the frames, a frame
- * list with their time stamps (docs/FORMAT-frames.md), the depth images and the ground-truth poses. Every file is written atomically; frames are rendered on several threads,
- * thread k taking frames k, k + n, k + 2n, ..., with identical bytes whatever the thread count.
+ * list with their time stamps (docs/FORMAT-frames.md), the depth images and the ground-truth poses. Every file is
+ * written atomically; frames are rendered on several threads, thread k taking frames k, k + n, k + 2n, ..., with
+ * identical bytes whatever the thread count.
  */
 public final class ScenarioWriter {
 
