@@ -40,8 +40,8 @@ public record Scenario(ScenarioConfig config, CameraModel camera, World world, L
     }
 
     static Scenario build(ScenarioConfig config, PhotoShelf photos) {
+        List<Session> sessions = YardRoutes.sessions(config, YardWorld.places(config.twinPlace()));
         World world = YardWorld.build(config, photos);
-        List<Session> sessions = YardRoutes.sessions(config, world.places());
         List<Visit> visits = YardRoutes.visits(sessions, world.places());
         return new Scenario(config, config.camera(), world, List.copyOf(sessions), List.copyOf(visits),
                 revisits(visits), decoys(visits, world));

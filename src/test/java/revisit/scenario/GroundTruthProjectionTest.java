@@ -23,7 +23,7 @@ import revisit.io.TrajectoryFile;
 
 class GroundTruthProjectionTest {
 
-    private static final ScenarioConfig CONFIG = ScenarioConfig.small().withoutNuisances();
+    private static final Scenario CLEAN = Scenario.build(ScenarioConfig.small().withoutNuisances());
 
     /** Centre of the kiosk's front face (the face seen from the lane). */
     private static Vec3 kioskFront(Scenario s, String place) {
@@ -50,7 +50,7 @@ class GroundTruthProjectionTest {
         // Reference library run in the test: OpenCV Calib3d.projectPoints with rvec/tvec of the world-to-camera
         // transform and the five distortion coefficients (k1, k2, p1, p2, k3).
         nu.pattern.OpenCV.loadLocally();
-        Scenario s = Scenario.build(CONFIG);
+        Scenario s = CLEAN;
         Session ses = s.sessions().get(0);
         List<StampedPose> poses = new ArrayList<>();
         for (int i = 0; i < ses.frameCount(); i++) {
@@ -110,7 +110,7 @@ class GroundTruthProjectionTest {
     void renderedDepthAtAProjectedKioskPointIsItsDepthInTheCamera() {
         // Ties the ground-truth pose and camera (checked against OpenCV above) to the pixels: where the kiosk
         // front's centre projects, the depth image holds that point's z in the camera.
-        Scenario s = Scenario.build(CONFIG);
+        Scenario s = CLEAN;
         FrameMaker maker = new FrameMaker(s);
         int checked = 0;
         for (Visit v : s.visits()) {
