@@ -14,7 +14,9 @@ import picocli.CommandLine.Command;
                 TuneCommand.class,
                 VocabTrainCommand.class,
                 VocabInfoCommand.class,
-                FeaturesCommand.class})
+                FeaturesCommand.class,
+                VerifyPairCommand.class,
+                MakeScenarioCommand.class})
 public final class RevisitCommand implements Runnable {
 
     @CommandLine.Spec
