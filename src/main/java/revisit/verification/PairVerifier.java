@@ -52,10 +52,8 @@ public final class PairVerifier {
         PointPairs p = PointPairs.of(a, b, matches, camera);
         double tF = config.inlierThresholdPx() * config.inlierThresholdPx();
         double tH = config.homographyThresholdPx() * config.homographyThresholdPx();
-        AdaptiveRansac.Residual epipolarError = (m, i) -> SampsonDistance.squaredFundamental(m, p.xa[i], p.ya[i],
-                p.xb[i], p.yb[i]);
-        AdaptiveRansac.Residual homographyError = (m, i) -> SampsonDistance.squaredHomography(m, p.xa[i], p.ya[i],
-                p.xb[i], p.yb[i]);
+        AdaptiveRansac.Residual epipolarError = p::epipolarSq;
+        AdaptiveRansac.Residual homographyError = p::homographySq;
         Optional<AdaptiveRansac.Fit> epipolar = p.calibrated()
                 ? AdaptiveRansac.run(n, fitters.essential(p), epipolarError, fitters.essentialRefit(p), tF, config)
                 : AdaptiveRansac.run(n, fitters.fundamental(p, config.fundamentalSolver()), epipolarError,
