@@ -5,12 +5,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.TimeUnit;
-import nu.pattern.OpenCV;
-import org.opencv.core.KeyPoint;
-import org.opencv.core.Mat;
-import org.opencv.core.MatOfKeyPoint;
-import org.opencv.features2d.ORB;
-import org.opencv.imgcodecs.Imgcodecs;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -23,7 +17,10 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Threads;
 import org.openjdk.jmh.annotations.Warmup;
 import revisit.camera.CameraModel;
+import revisit.features.FeatureConfig;
+import revisit.features.FeatureExtractor;
 import revisit.features.FrameFeatures;
+import revisit.io.ImageFiles;
 import revisit.verification.Correspondences;
 import revisit.verification.DescriptorMatcher;
 import revisit.verification.PairVerifier;
@@ -32,8 +29,7 @@ import revisit.verification.VerificationConfig;
 
 /**
  * Verification of one candidate pair on one core: Middlebury templeSparseRing views 7 and 8 (Seitz et al., CVPR
- * 2006; exact camera from templeSR_par.txt), 1000 ORB features per view from OpenCV (stand-in until the project's
- * extractor is merged). Node ids for the restricted matcher are the top 6 descriptor bits (64 groups), a stand-in
+ * 2006; exact camera from templeSR_par.txt), 1000 features per view from the project's extractor. Node ids for the restricted matcher are the top 6 descriptor bits (64 groups), a stand-in
  * for vocabulary nodes. Run: {@code mvn -B -Pbench -DskipTests package && java -jar target/benchmarks.jar
  * VerificationBenchmark}.
  */
@@ -62,8 +58,8 @@ public class VerificationBenchmark {
         String[] f = lines.get(7).trim().split("\\s+");
         camera = new CameraModel(640, 480, Double.parseDouble(f[1]), Double.parseDouble(f[5]),
                 Double.parseDouble(f[2]), Double.parseDouble(f[3]), Double.parseDouble(f[6]), 0, 0, 0, 0, 0);
-        a = orb(dir.resolve(f[0]));
-        b = orb(dir.resolve(lines.get(8).trim().split("\\s+")[0]));
+        a = features(dir.resolve(f[0]));
+        b = features(dir.resolve(lines.get(8).trim().split("\\s+")[0]));
         nodesA = topBits(a);
         nodesB = topBits(b);
         VerificationConfig config = VerificationConfig.defaults();
@@ -119,26 +115,7 @@ public class VerificationBenchmark {
         throw new IllegalStateException("../shared/data not found from " + cwd);
     }
 
-    static FrameFeatures orb(Path image) {
-        OpenCV.loadLocally();
-        Mat gray = Imgcodecs.imread(image.toString(), Imgcodecs.IMREAD_GRAYSCALE);
-        MatOfKeyPoint kps = new MatOfKeyPoint();
-        Mat desc = new Mat();
-        ORB.create(1000).detectAndCompute(gray, new Mat(), kps, desc);
-        KeyPoint[] k = kps.toArray();
-        int n = k.length;
-        float[] x = new float[n];
-        float[] y = new float[n];
-        long[] d = new long[n * FrameFeatures.STRIDE];
-        byte[] row = new byte[32];
-        for (int i = 0; i < n; i++) {
-            x[i] = (float) k[i].pt.x;
-            y[i] = (float) k[i].pt.y;
-            desc.get(i, 0, row);
-            for (int j = 0; j < 32; j++) {
-                d[i * 4 + j / 8] |= (row[j] & 0xFFL) << (8 * (j % 8));
-            }
-        }
-        return new FrameFeatures(n, x, y, new float[n], new int[n], new float[n], new float[n], d);
+    static FrameFeatures features(Path image) {
+        return new FeatureExtractor(FeatureConfig.defaults()).extract(ImageFiles.readGray(image));
     }
 }

@@ -2,7 +2,6 @@ package revisit.verification;
 
 import java.util.Arrays;
 import revisit.features.FrameFeatures;
-import revisit.features.Hamming;
 
 /**
  * Nearest-neighbour matching of binary descriptors by Hamming distance, with the ratio test (Lowe, IJCV 2004)
@@ -68,12 +67,19 @@ public final class DescriptorMatcher {
                 long[] db = b.descriptors();
                 for (int p = ia; p < endA; p++) {
                     int i = (int) keysA[p];
+                    int base = i * FrameFeatures.STRIDE;
+                    long a0 = da[base];
+                    long a1 = da[base + 1];
+                    long a2 = da[base + 2];
+                    long a3 = da[base + 3];
                     int best = Integer.MAX_VALUE;
                     int second = Integer.MAX_VALUE;
                     int bestJ = -1;
                     for (int q = ib; q < endB; q++) {
                         int j = (int) keysB[q];
-                        int d = Hamming.distance(da, i, db, j);
+                        int jb = j * FrameFeatures.STRIDE;
+                        int d = Long.bitCount(a0 ^ db[jb]) + Long.bitCount(a1 ^ db[jb + 1])
+                                + Long.bitCount(a2 ^ db[jb + 2]) + Long.bitCount(a3 ^ db[jb + 3]);
                         if (d < best) {
                             second = best;
                             best = d;

@@ -1,7 +1,8 @@
 package revisit.verification;
 
 /**
- * Pose refinement on the epipolar constraint: residual i is the signed Sampson distance (pixels, undistorted) of
+ * Pose refinement on the epipolar constraint: residual i is the signed Sampson distance (detection-level
+ * pixels, see {@link PointPairs}) of
  * inlier i to {@code F = K^-T [t]x R K^-1}. State is {@code (R row-major, t)} with |t| = 1; the step is
  * {@code (dtheta_x, dtheta_y, dtheta_z, u1, u2)}: {@code R <- exp([dtheta]x) R} and
  * {@code t <- unit(t + u1 b1 + u2 b2)} with {@code (b1, b2)} the tangent basis of t (5 degrees of freedom,
@@ -55,7 +56,7 @@ final class EpipolarPoseProblem implements LevenbergMarquardt.Problem {
         double[] f = fundamental(state);
         for (int n = 0; n < inliers.length; n++) {
             int i = inliers[n];
-            out[n] = SampsonDistance.signedFundamental(f, points.xa[i], points.ya[i], points.xb[i], points.yb[i]);
+            out[n] = points.epipolarSigned(f, i);
         }
     }
 

@@ -52,10 +52,8 @@ public final class PairVerifier {
         PointPairs p = PointPairs.of(a, b, matches, camera);
         double tF = config.inlierThresholdPx() * config.inlierThresholdPx();
         double tH = config.homographyThresholdPx() * config.homographyThresholdPx();
-        AdaptiveRansac.Residual epipolarError = (m, i) -> SampsonDistance.squaredFundamental(m, p.xa[i], p.ya[i],
-                p.xb[i], p.yb[i]);
-        AdaptiveRansac.Residual homographyError = (m, i) -> SampsonDistance.squaredHomography(m, p.xa[i], p.ya[i],
-                p.xb[i], p.yb[i]);
+        AdaptiveRansac.Residual epipolarError = p::epipolarSq;
+        AdaptiveRansac.Residual homographyError = p::homographySq;
         Optional<AdaptiveRansac.Fit> epipolar = p.calibrated()
                 ? AdaptiveRansac.run(n, fitters.essential(p), epipolarError, fitters.essentialRefit(p), tF, config)
                 : AdaptiveRansac.run(n, fitters.fundamental(p, config.fundamentalSolver()), epipolarError,
@@ -75,7 +73,7 @@ public final class PairVerifier {
         ModelScores scores = new ModelScores(epipolarGric, homographyGric,
                 rotation.map(RotationFit::gric).orElse(Double.NaN));
         ModelKind kind = choose(scores, p.calibrated());
-        return switch (kind) {
+        Verification result = switch (kind) {
             case NONE -> Verification.rejected(Outcome.DEGENERATE, n, scores, iterations);
             case ESSENTIAL -> fromPose(kind, n, epipolar.get(), poses.fromEssential(p, epipolar.get()), scores,
                     iterations, p.essentialFromFundamental(epipolar.get().model()));
@@ -86,6 +84,10 @@ public final class PairVerifier {
                     : uncalibrated(kind, n, homography.get(), homographyError, scores, iterations);
             case ROTATION -> rotation.get().verification(n, scores, iterations, config);
         };
+        return result.accepted() && !InlierSpread.sufficient(p, result.inlierMatches(), config)
+                ? new Verification(Outcome.DEGENERATE, result.model(), n, result.inlierMatches(), result.model3x3(),
+                Optional.empty(), result.errors(), scores, iterations)
+                : result;
     }
 
     /**

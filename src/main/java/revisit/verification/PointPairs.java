@@ -10,6 +10,12 @@ import revisit.features.FrameFeatures;
 /**
  * Coordinates of the matched points, once per pair: pixels (undistorted through the camera when one is given,
  * so that the pinhole relations hold exactly) and, with a camera, normalised coordinates.
+ *
+ * <p>Errors are measured in pixels of the coarser of the two detection levels: a keypoint found on a pyramid
+ * level whose pixel is s level-0 pixels wide is located about s times less precisely, so each squared error is
+ * divided by {@code s^2} with {@code s = max(scale_a, scale_b, 1)} (the per-level noise model of common practice;
+ * covariance-weighted errors as in Hartley &amp; Zisserman 2004, sec. 4.2.6). All thresholds and the model
+ * selection then use one noise level.
  */
 final class PointPairs {
 
@@ -18,6 +24,8 @@ final class PointPairs {
     final double[] ya;
     final double[] xb;
     final double[] yb;
+    /** 1 / s^2 per match, s the coarser detection scale (at least 1). */
+    final double[] weight;
     /** Pairs in pixels (undistorted when calibrated), for BoofCV's solvers. */
     final List<AssociatedPair> pixels;
     /** Pairs in normalised coordinates; empty without a camera. */
@@ -32,6 +40,7 @@ final class PointPairs {
         ya = new double[count];
         xb = new double[count];
         yb = new double[count];
+        weight = new double[count];
         pixels = new ArrayList<>(count);
         normalized = new ArrayList<>(camera.isPresent() ? count : 0);
         k = camera.map(c -> new double[]{c.fx(), c.skew(), c.cx(), 0, c.fy(), c.cy(), 0, 0, 1})
@@ -63,8 +72,25 @@ final class PointPairs {
                 p.yb[m] = b.y()[j];
             }
             p.pixels.add(new AssociatedPair(p.xa[m], p.ya[m], p.xb[m], p.yb[m]));
+            double s = Math.max(1, Math.max(a.scale()[i], b.scale()[j]));
+            p.weight[m] = 1 / (s * s);
         }
         return p;
+    }
+
+    /** Squared Sampson distance of match i to {@code xb^T F xa = 0}, detection-level pixels squared. */
+    double epipolarSq(double[] f, int i) {
+        return SampsonDistance.squaredFundamental(f, xa[i], ya[i], xb[i], yb[i]) * weight[i];
+    }
+
+    /** Signed Sampson distance of match i to the epipolar constraint, detection-level pixels. */
+    double epipolarSigned(double[] f, int i) {
+        return SampsonDistance.signedFundamental(f, xa[i], ya[i], xb[i], yb[i]) * Math.sqrt(weight[i]);
+    }
+
+    /** Squared Sampson distance of match i to the homography, detection-level pixels squared. */
+    double homographySq(double[] h, int i) {
+        return SampsonDistance.squaredHomography(h, xa[i], ya[i], xb[i], yb[i]) * weight[i];
     }
 
     boolean calibrated() {

@@ -50,8 +50,7 @@ final class PoseRecovery {
             state = LevenbergMarquardt.minimize(problem, state, config.refineIterations()).state();
             double cut = widen * config.inlierThresholdPx();
             boolean[] mask = new boolean[p.count];
-            AdaptiveRansac.classify(p.count, problem.fundamental(state), (m, i) -> SampsonDistance
-                    .squaredFundamental(m, p.xa[i], p.ya[i], p.xb[i], p.yb[i]), cut * cut, mask);
+            AdaptiveRansac.classify(p.count, problem.fundamental(state), p::epipolarSq, cut * cut, mask);
             inliers = indices(mask);
         }
         return finish(p, inliers, state, false);

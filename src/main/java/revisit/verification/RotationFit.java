@@ -76,7 +76,7 @@ final class RotationFit {
     private static double[] squaredErrors(PointPairs p, double[] h) {
         double[] e = new double[p.count];
         for (int i = 0; i < p.count; i++) {
-            e[i] = SampsonDistance.squaredHomography(h, p.xa[i], p.ya[i], p.xb[i], p.yb[i]);
+            e[i] = p.homographySq(h, i);
         }
         return e;
     }

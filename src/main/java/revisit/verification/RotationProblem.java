@@ -8,7 +8,7 @@ import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
 
 /**
- * Pure-rotation refinement: residuals are the image transfer errors (two per inlier, undistorted pixels) of
+ * Pure-rotation refinement: residuals are the image transfer errors (two per inlier, detection-level pixels) of
  * {@code x_b ~ K R K^-1 x_a}, the infinite homography of H&amp;Z 2004 sec. 8.4.5. State is R row-major; the step
  * is dtheta with {@code R <- exp([dtheta]x) R}.
  */
@@ -45,8 +45,9 @@ final class RotationProblem implements LevenbergMarquardt.Problem {
             double xa = points.xa[i];
             double ya = points.ya[i];
             double w = h[6] * xa + h[7] * ya + h[8];
-            out[2 * n] = (h[0] * xa + h[1] * ya + h[2]) / w - points.xb[i];
-            out[2 * n + 1] = (h[3] * xa + h[4] * ya + h[5]) / w - points.yb[i];
+            double sw = Math.sqrt(points.weight[i]);
+            out[2 * n] = sw * ((h[0] * xa + h[1] * ya + h[2]) / w - points.xb[i]);
+            out[2 * n + 1] = sw * ((h[3] * xa + h[4] * ya + h[5]) / w - points.yb[i]);
         }
     }
 

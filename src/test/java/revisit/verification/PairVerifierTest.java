@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
@@ -148,6 +149,48 @@ class PairVerifierTest {
         assertEquals(0, v.inlierCount());
         Verification empty = verifier.verify(FrameFeatures.empty(), FrameFeatures.empty(), CAMERA);
         assertEquals(Outcome.TOO_FEW_MATCHES, empty.outcome());
+    }
+
+    @Test
+    void coincidentPointsAreRejectedWithoutException() {
+        int n = 40;
+        float[] x = new float[n];
+        float[] y = new float[n];
+        java.util.Arrays.fill(x, 100f);
+        java.util.Arrays.fill(y, 50f);
+        FrameFeatures same = SyntheticPair.features(x, y);
+        int[] idx = new int[n];
+        for (int i = 0; i < n; i++) {
+            idx[i] = i;
+        }
+        Correspondences m = new Correspondences(n, idx, idx.clone(), new int[n]);
+        for (Optional<CameraModel> camera : List.of(CAMERA, Optional.<CameraModel>empty())) {
+            Verification v = verifier.verify(same, same, m, camera);
+            assertFalse(v.accepted(), "outcome " + v.outcome() + " model " + v.model());
+        }
+    }
+
+    @Test
+    void pointsAlongOneLineAreDegenerate() {
+        int n = 60;
+        float[] xa = new float[n];
+        float[] ya = new float[n];
+        float[] xb = new float[n];
+        float[] yb = new float[n];
+        for (int i = 0; i < n; i++) {
+            xa[i] = 20 + 10 * i;
+            ya[i] = 100 + 0.5f * i;
+            xb[i] = xa[i] + 15;
+            yb[i] = ya[i] + 3;
+        }
+        int[] idx = new int[n];
+        for (int i = 0; i < n; i++) {
+            idx[i] = i;
+        }
+        Correspondences m = new Correspondences(n, idx, idx.clone(), new int[n]);
+        Verification v = verifier.verify(SyntheticPair.features(xa, ya), SyntheticPair.features(xb, yb), m, CAMERA);
+        assertFalse(v.accepted(), "outcome " + v.outcome() + " model " + v.model());
+        assertTrue(v.pose().isEmpty());
     }
 
     @Test

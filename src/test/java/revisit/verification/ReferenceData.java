@@ -7,18 +7,15 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import nu.pattern.OpenCV;
-import org.opencv.core.Mat;
-import org.opencv.core.MatOfKeyPoint;
-import org.opencv.core.KeyPoint;
-import org.opencv.features2d.ORB;
-import org.opencv.imgcodecs.Imgcodecs;
 import revisit.camera.CameraModel;
+import revisit.features.FeatureConfig;
+import revisit.features.FeatureExtractor;
 import revisit.features.FrameFeatures;
+import revisit.io.ImageFiles;
 
 /**
- * Access to the shared real data (../shared/data, see its README for sources) and, until the project's own
- * extractor is available here, ORB features computed by OpenCV's Java bindings (reference library, test scope).
+ * Access to the shared real data (../shared/data, see its README for sources) and features of its images from
+ * the project's extractor.
  */
 final class ReferenceData {
 
@@ -44,28 +41,10 @@ final class ReferenceData {
         return p;
     }
 
-    /** ORB features (OpenCV, 256-bit descriptors packed 4 longs per feature, byte k in bits 8k..8k+7). */
-    static FrameFeatures orb(Path image, int maxFeatures) {
-        OpenCV.loadLocally();
-        Mat gray = Imgcodecs.imread(image.toString(), Imgcodecs.IMREAD_GRAYSCALE);
-        MatOfKeyPoint kps = new MatOfKeyPoint();
-        Mat desc = new Mat();
-        ORB.create(maxFeatures).detectAndCompute(gray, new Mat(), kps, desc);
-        KeyPoint[] k = kps.toArray();
-        int n = k.length;
-        float[] x = new float[n];
-        float[] y = new float[n];
-        long[] d = new long[n * 4];
-        byte[] row = new byte[32];
-        for (int i = 0; i < n; i++) {
-            x[i] = (float) k[i].pt.x;
-            y[i] = (float) k[i].pt.y;
-            desc.get(i, 0, row);
-            for (int b = 0; b < 32; b++) {
-                d[i * 4 + b / 8] |= (row[b] & 0xFFL) << (8 * (b % 8));
-            }
-        }
-        return new FrameFeatures(n, x, y, new float[n], new int[n], new float[n], new float[n], d);
+    /** Features of an image from the project's extractor, default settings but for the feature budget. */
+    static FrameFeatures features(Path image, int maxFeatures) {
+        return new FeatureExtractor(FeatureConfig.defaults().withMaxFeatures(maxFeatures))
+                .extract(ImageFiles.readGray(image));
     }
 
     /**
