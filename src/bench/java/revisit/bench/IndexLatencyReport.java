@@ -14,8 +14,9 @@ import revisit.index.WordVector;
  * Query latency as on-CPU time of the querying thread (p50 / p99), next to wall time, at 1k, 10k and 100k frames
  * (500 Zipf features over 10^6 words, as {@link IndexQueryBenchmark}). On a shared, oversubscribed machine the wall
  * time of one query includes the time the thread waited for a core; the thread's CPU time does not, so it is the
- * better estimate of the latency on one dedicated core. It complements, not replaces, the JMH benchmark. Prints a
- * Markdown table.
+ * better estimate of the latency on one dedicated core. It complements, not replaces, the JMH benchmarks. Also the
+ * CPU time of each add while the database grows to that size (the first row: from 0 to 1k frames, warm-up included).
+ * Prints a Markdown table.
  *
  * <p>Run: {@code mvn -B -Pbench -DskipTests package && java -Xmx3g -XX:+UseParallelGC -cp target/benchmarks.jar
  * revisit.bench.IndexLatencyReport [fraction] [stopListMinFrames]}
@@ -36,16 +37,20 @@ public final class IndexLatencyReport {
         SyntheticScan scan = new SyntheticScan(1_000_000, 1.0, 500, 1000, 42L);
         IndexConfig config = IndexConfig.defaults().withMaxWordFrameFraction(fraction).withStopListMinFrames(minFrames);
         RevisitDatabase database = new RevisitDatabase(scan.weights(), config);
-        System.out.println("| frames | maxWordFrameFraction | stopListMinFrames | CPU p50 us | CPU p99 us | wall p50 us"
-                + " | wall p99 us | mean stop-word weight |");
-        System.out.println("|---|---|---|---|---|---|---|---|");
+        System.out.println("| frames | maxWordFrameFraction | stopListMinFrames | query CPU p50 us | query CPU p99 us"
+                + " | query wall p50 us | query wall p99 us | mean stop-word weight | add CPU mean us | add CPU p99 us |");
+        System.out.println("|---|---|---|---|---|---|---|---|---|---|");
         int added = 0;
         int[][] kept = new int[QUERIES / 2][];
         for (int size : new int[]{1000, 10_000, 100_000}) {
+            long[] addNanos = new long[size - added];
             while (added < size) {
                 int[] words = scan.words();
                 kept[added % kept.length] = words;
-                database.add(scan.frame(0, added, added * 0.1, words));
+                FrameWords frame = scan.frame(0, added, added * 0.1, words);
+                long c0 = cpu.getCurrentThreadCpuTime();
+                database.add(frame);
+                addNanos[addNanos.length - (size - added)] = cpu.getCurrentThreadCpuTime() - c0;
                 added++;
             }
             FrameWords[] queries = new FrameWords[QUERIES];
@@ -72,10 +77,19 @@ public final class IndexLatencyReport {
                     }
                 }
             }
-            System.out.printf(Locale.ROOT, "| %d | %s | %d | %.0f | %.0f | %.0f | %.0f | %.3f |%n", size, fraction,
-                    minFrames, percentile(cpuNanos, 0.5), percentile(cpuNanos, 0.99), percentile(wallNanos, 0.5),
-                    percentile(wallNanos, 0.99), stopWeight / (QUERIES * (WARMUP_ROUNDS + ROUNDS)));
+            System.out.printf(Locale.ROOT, "| %d | %s | %d | %.0f | %.0f | %.0f | %.0f | %.3f | %.0f | %.0f |%n", size,
+                    fraction, minFrames, percentile(cpuNanos, 0.5), percentile(cpuNanos, 0.99),
+                    percentile(wallNanos, 0.5), percentile(wallNanos, 0.99),
+                    stopWeight / (QUERIES * (WARMUP_ROUNDS + ROUNDS)), mean(addNanos), percentile(addNanos, 0.99));
         }
+    }
+
+    private static double mean(long[] nanos) {
+        double sum = 0;
+        for (long n : nanos) {
+            sum += n;
+        }
+        return sum / nanos.length / 1000.0;
     }
 
     private static double percentile(long[] nanos, double p) {

@@ -1,6 +1,5 @@
 package revisit.index;
 
-import java.io.ByteArrayOutputStream;
 import java.util.Arrays;
 
 /**
@@ -69,14 +68,14 @@ final class DirectIndex {
             keyed[i] = (long) nodes[i] << 32 | i;
         }
         Arrays.sort(keyed);
-        ByteArrayOutputStream out = new ByteArrayOutputStream(nodes.length * 2 + 8);
         int distinct = 0;
         for (int i = 0; i < keyed.length; i++) {
             if (i == 0 || keyed[i] >>> 32 != keyed[i - 1] >>> 32) {
                 distinct++;
             }
         }
-        writeVarint(out, distinct);
+        byte[] out = new byte[5 + 15 * nodes.length];
+        int pos = writeVarint(out, 0, distinct);
         int previousNode = 0;
         for (int start = 0; start < keyed.length; ) {
             int node = (int) (keyed[start] >>> 32);
@@ -84,18 +83,18 @@ final class DirectIndex {
             while (end < keyed.length && (int) (keyed[end] >>> 32) == node) {
                 end++;
             }
-            writeVarint(out, node - previousNode);
-            writeVarint(out, end - start);
+            pos = writeVarint(out, pos, node - previousNode);
+            pos = writeVarint(out, pos, end - start);
             int previousFeature = -1;
             for (int k = start; k < end; k++) {
                 int feature = (int) keyed[k];
-                writeVarint(out, feature - previousFeature);
+                pos = writeVarint(out, pos, feature - previousFeature);
                 previousFeature = feature;
             }
             previousNode = node;
             start = end;
         }
-        return out.toByteArray();
+        return Arrays.copyOf(out, pos);
     }
 
     /** Decodes an entry; throws {@link IllegalArgumentException} when the bytes are not a valid entry. */
@@ -134,13 +133,16 @@ final class DirectIndex {
         return new NodeFeatures(nodes, offsets, Arrays.copyOf(features, total));
     }
 
-    private static void writeVarint(ByteArrayOutputStream out, int value) {
+    /** Writes {@code value} (>= 0) at {@code pos} and returns the position after it. */
+    private static int writeVarint(byte[] out, int pos, int value) {
         int v = value;
+        int p = pos;
         while ((v & ~0x7F) != 0) {
-            out.write((v & 0x7F) | 0x80);
+            out[p++] = (byte) ((v & 0x7F) | 0x80);
             v >>>= 7;
         }
-        out.write(v);
+        out[p++] = (byte) v;
+        return p;
     }
 
     private static int readVarint(byte[] bytes, int[] pos) {

@@ -19,6 +19,7 @@ final class FrameTable {
     private final Map<Long, Integer> slotByKey = new HashMap<>();
     private int slots;
     private int live;
+    private int version;
 
     /** Adds a frame and returns its slot. */
     int append(int sequenceId, int frameId, double timeSeconds, float inverseNorm) {
@@ -78,6 +79,7 @@ final class FrameTable {
         }
         Arrays.fill(removed, next, slots, false);
         slots = next;
+        version++;
         return newSlot;
     }
 
@@ -124,9 +126,9 @@ final class FrameTable {
         return inverseNorms[slot];
     }
 
-    /** Direct access for the scoring loop; read only. */
-    float[] inverseNorms() {
-        return inverseNorms;
+    /** Changes whenever slots are renumbered ({@link #compact()}). */
+    int version() {
+        return version;
     }
 
     /** Bytes held: the per-slot arrays at their capacity plus about 72 bytes per entry of the key map. */

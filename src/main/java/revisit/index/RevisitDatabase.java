@@ -153,6 +153,10 @@ public final class RevisitDatabase {
                 normalisedScore);
     }
 
+    FrameScorer scorer() {
+        return scorer;
+    }
+
     InvertedIndex index() {
         return index;
     }

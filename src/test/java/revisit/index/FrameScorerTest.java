@@ -41,6 +41,40 @@ class FrameScorerTest {
 
     @ParameterizedTest
     @EnumSource(ScoreNorm.class)
+    void touchedListAndFullSweepBothMatchDenseScores(ScoreNorm norm) {
+        // Frames see narrow windows of the vocabulary, so small queries touch few frames (touched list) and large
+        // ones many (sweep of all slots); both paths must give the dense scores.
+        double[] idf = TestFrames.idf(WORDS, 0.0, SEED);
+        IndexConfig config = IndexConfig.defaults().withScoreNorm(norm).withExclusionSeconds(0).withMaxCandidates(1000);
+        RevisitDatabase db = new RevisitDatabase(new WordWeights(WORDS, idf), config);
+        Random random = new Random(SEED);
+        List<FrameWords> frames = new ArrayList<>();
+        for (int i = 0; i < 200; i++) {
+            frames.add(TestFrames.frame(0, i, i, TestFrames.windowWords(random, 12, (i * 2) % (WORDS - 20), 20)));
+            db.add(frames.get(i));
+        }
+        RevisitSearch search = new RevisitSearch(db);
+        boolean[] modes = new boolean[2];
+        for (int q = 0; q < 60; q++) {
+            int features = q % 2 == 0 ? 2 : 300;
+            FrameWords query = TestFrames.frame(1, q, q, TestFrames.skewedWords(random, features, WORDS));
+            Map<Integer, Double> returned = new HashMap<>();
+            search.query(query).candidates().forEach(c -> returned.put(c.frameId(), c.rawScore()));
+            modes[db.scorer().lastSwept() ? 1 : 0] = true;
+            for (FrameWords other : frames) {
+                double expected = dense(idf, query.words(), other.words(), norm);
+                if (expected > 1e-9) {
+                    assertEquals(expected, returned.get(other.frameId()), 2e-6, "seed " + SEED + " query " + q);
+                } else {
+                    assertFalse(returned.containsKey(other.frameId()));
+                }
+            }
+        }
+        assertTrue(modes[0] && modes[1], "both scoring paths must run");
+    }
+
+    @ParameterizedTest
+    @EnumSource(ScoreNorm.class)
     void stopListLeavesTheCommonWordsOutOfScoresAndNormaliser(ScoreNorm norm) {
         Fixture f = new Fixture(norm, 0.3);
         int[] frameCount = new int[WORDS];
