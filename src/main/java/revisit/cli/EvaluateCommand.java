@@ -63,8 +63,8 @@ final class EvaluateCommand implements Callable<Integer> {
         if (report != null) {
             ReportInput input = ReportInput.of("Revisit evaluation: " + scanDir.toAbsolutePath().normalize(),
                     result, truth).withPairs(ScanReportPairs.pairs(scanDir, result, 12));
-            if (!labels.firstPoses.isEmpty()) {
-                input = input.withPoses(labels.firstPoses);
+            if (!labels.allPoses.isEmpty()) {
+                input = input.withPoses(labels.allPoses);
             }
             Path index = HtmlReport.write(report, input);
             spec.commandLine().getOut().println("report: " + index.toAbsolutePath().normalize());

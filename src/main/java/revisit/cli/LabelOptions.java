@@ -41,8 +41,8 @@ final class LabelOptions {
             description = "A detection within N frames of a labelled match counts as true.")
     int frameTolerance;
 
-    /** Poses of the first sequence aligned to its frames (for the trajectory plot); filled by {@link #load}. */
-    final List<StampedPose> firstPoses = new ArrayList<>();
+    /** Poses of every scanned frame in scan order (for the trajectory plot); filled by {@link #load}. */
+    final List<StampedPose> allPoses = new ArrayList<>();
 
     /** Labels over the scanned frames, excluding what the scan's index excludes. */
     RevisitLabels load(FrameTimeline timeline, ScanConfig scanConfig) {
@@ -59,16 +59,14 @@ final class LabelOptions {
                     + timeline.sequences().size() + " scanned sequences; give one per sequence in scan order");
         }
         Map<String, List<StampedPose>> bySeq = new LinkedHashMap<>();
+        allPoses.clear();
         for (int s = 0; s < poses.size(); s++) {
             var frames = timeline.sequences().get(s);
             List<StampedPose> aligned = PoseAlignment.align(TrajectoryFile.read(poses.get(s)), frames, poses.get(s));
             bySeq.put(frames.sequenceId(), aligned);
-            if (s == 0) {
-                firstPoses.clear();
-                firstPoses.addAll(aligned);
-            }
+            allPoses.addAll(aligned);
         }
         return PoseLabels.derive(bySeq, PoseLabelConfig.defaults().withMaxDistance(maxDistance)
-                .withMaxViewAngleDegrees(maxAngleDeg).withWindow(window));
+                .withMaxViewAngleDegrees(maxAngleDeg > 0 ? maxAngleDeg : 180).withWindow(window));
     }
 }

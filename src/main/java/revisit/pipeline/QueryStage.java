@@ -8,6 +8,8 @@ public enum QueryStage {
     PROPOSED,
     /** A revisit was confirmed over time, but geometric verification refused it. */
     CONSISTENT,
-    /** Geometric verification accepted the revisit: a closure was emitted. */
+    /** Geometric verification accepted the revisit, but the consistency check found it contradicts others. */
+    CONFLICTING,
+    /** Geometric verification accepted the revisit and no check objected: a closure was emitted. */
     VERIFIED
 }

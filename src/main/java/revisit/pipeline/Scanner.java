@@ -120,12 +120,31 @@ public final class Scanner {
             }
             List<Closure> checked = ClosureChecks.apply(step.closures(),
                     inputs.stream().map(SequenceInput::name).toList(), options.odometry(), config.consistency());
-            return new ScanResult(checked, step.traces(), List.copyOf(inputs), List.copyOf(skipped), times,
-                    recovered.size(), stop);
+            return new ScanResult(checked, markConflicts(step.traces(), checked), List.copyOf(inputs),
+                    List.copyOf(skipped), times, recovered.size(), stop);
         } finally {
             pool.shutdownNow();
             cache.ifPresent(FrameCache::close);
         }
+    }
+
+    /** Traces whose closure the consistency check found conflicting get that stage. */
+    static List<QueryTrace> markConflicts(List<QueryTrace> traces, List<Closure> closures) {
+        java.util.Set<Long> conflicting = new java.util.HashSet<>();
+        for (Closure c : closures) {
+            if (c.status() == ClosureStatus.CONFLICTING) {
+                conflicting.add(((long) c.querySequence() << 32) | c.queryFrame());
+            }
+        }
+        List<QueryTrace> out = new ArrayList<>(traces.size());
+        for (QueryTrace t : traces) {
+            boolean hit = t.stage() == QueryStage.VERIFIED
+                    && conflicting.contains(((long) t.sequence() << 32) | t.frame());
+            out.add(hit ? new QueryTrace(t.sequence(), t.frame(), t.time(), QueryStage.CONFLICTING,
+                    t.matchSequence(), t.matchFrame(), t.score(), t.inliers(), "conflicting with other closures")
+                    : t);
+        }
+        return out;
     }
 
     private String scanSequence(int seq, SequenceInput input, int lastDone, ExecutorService pool, QueryStep step,

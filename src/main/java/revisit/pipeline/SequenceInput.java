@@ -12,7 +12,7 @@ public record SequenceInput(Path path, String name) {
 
     /**
      * Sequences named after their files or folders; where two would share a name, the parent folder is put in
-     * front ({@code session1/frames}), and failing that the position ({@code frames#2}).
+     * front ({@code session1-frames}), and failing that the position ({@code frames-2}).
      */
     public static java.util.List<SequenceInput> ofAll(java.util.List<Path> paths) {
         java.util.List<SequenceInput> plain = paths.stream().map(SequenceInput::of).toList();
@@ -24,10 +24,10 @@ public record SequenceInput(Path path, String name) {
             long same = plain.stream().filter(o -> o.name().equals(s.name())).count();
             Path abs = s.path().toAbsolutePath().normalize();
             if (same > 1 && abs.getParent() != null && abs.getParent().getFileName() != null) {
-                name = abs.getParent().getFileName() + "/" + name;
+                name = abs.getParent().getFileName() + "-" + name;
             }
             if (!used.add(name)) {
-                name = name + "#" + (i + 1);
+                name = name + "-" + (i + 1);
                 used.add(name);
             }
             out.add(new SequenceInput(s.path(), name));
