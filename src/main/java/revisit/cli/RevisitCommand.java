@@ -9,6 +9,7 @@ import picocli.CommandLine.Command;
                 + "exports verified closures for pose-graph optimizers.",
         subcommands = {
                 CommandLine.HelpCommand.class,
+                DemoCommand.class,
                 ScanCommand.class,
                 EvaluateCommand.class,
                 TuneCommand.class,

@@ -77,8 +77,9 @@ final class ScanCommand implements Callable<Integer> {
     @Option(names = "--keep-rejected", description = "Also list candidates that failed verification.")
     boolean keepRejected;
 
-    @Option(names = "--trusted-only", description = "Write only trusted closures to the edge file.")
-    boolean trustedOnly;
+    @Option(names = "--include-unchecked", description = "Also write closures the consistency check could not "
+            + "corroborate (no partner closure, no odometry) to the edge file; by default only trusted ones go there.")
+    boolean includeUnchecked;
 
     @Option(names = "--fresh", description = "Ignore an existing checkpoint in the output folder.")
     boolean fresh;
@@ -116,7 +117,7 @@ final class ScanCommand implements Callable<Integer> {
         try (ScanProgress progress = new ScanProgress(!quiet, spec.commandLine().getErr())) {
             result = scanner.run(sequences, progress);
         }
-        ScanOutputs.write(out, result, cfg, trustedOnly);
+        ScanOutputs.write(out, result, cfg, includeUnchecked);
         var o = spec.commandLine().getOut();
         o.print(ScanOutputs.summary(result));
         o.println("outputs: " + out.resolve(ScanOutputs.JSONL) + ", " + ScanOutputs.CSV + ", " + ScanOutputs.EDGES);

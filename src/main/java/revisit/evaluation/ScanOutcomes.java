@@ -25,7 +25,7 @@ public final class ScanOutcomes {
             }
             StageReached stage = switch (t.stage()) {
                 case PROPOSED -> StageReached.PROPOSED;
-                case CONSISTENT, CONFLICTING -> StageReached.CONSISTENT;
+                case CONSISTENT, CONFLICTING, UNCHECKED -> StageReached.CONSISTENT;
                 case VERIFIED -> StageReached.VERIFIED;
                 case NO_CANDIDATE -> StageReached.LOOKED_UP;
             };

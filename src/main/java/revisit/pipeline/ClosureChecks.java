@@ -42,6 +42,10 @@ public final class ClosureChecks {
             if (c.status() == ClosureStatus.REJECTED) {
                 continue;
             }
+            if (java.util.Arrays.stream(c.information()).allMatch(v -> v == 0)) {
+                notCheckable.put(String.valueOf(i), "no relative pose to check (give a camera file)");
+                continue;
+            }
             try {
                 constraints.add(toConstraint(String.valueOf(i), c, names));
             } catch (IllegalArgumentException e) {

@@ -10,6 +10,11 @@ public enum QueryStage {
     CONSISTENT,
     /** Geometric verification accepted the revisit, but the consistency check found it contradicts others. */
     CONFLICTING,
-    /** Geometric verification accepted the revisit and no check objected: a closure was emitted. */
+    /**
+     * Geometric verification accepted the revisit, but no partner closure or odometry could corroborate it: listed
+     * in JSON Lines and CSV, written as an edge only on request.
+     */
+    UNCHECKED,
+    /** Geometric verification accepted the revisit and the consistency check corroborated it: a trusted closure. */
     VERIFIED
 }

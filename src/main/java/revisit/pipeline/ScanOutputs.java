@@ -31,15 +31,14 @@ public final class ScanOutputs {
      * @param dir         output folder
      * @param result      the scan's result
      * @param config      the effective configuration
-     * @param trustedOnly export only trusted closures to the edge file
+     * @param includeUnchecked also write closures the consistency check could not corroborate to the edge file
      */
-    public static void write(Path dir, ScanResult result, ScanConfig config, boolean trustedOnly) {
+    public static void write(Path dir, ScanResult result, ScanConfig config, boolean includeUnchecked) {
         List<Closure> all = result.closures();
         ClosureWriters.writeJsonLines(dir.resolve(JSONL), all);
         ClosureWriters.writeCsv(dir.resolve(CSV), all);
-        List<Closure> edges = trustedOnly
-                ? all.stream().filter(c -> c.status() == ClosureStatus.TRUSTED).toList()
-                : all.stream().filter(c -> c.status() != ClosureStatus.CONFLICTING).toList();
+        List<Closure> edges = all.stream().filter(c -> c.status() == ClosureStatus.TRUSTED
+                || (includeUnchecked && c.status() == ClosureStatus.UNCHECKED)).toList();
         ClosureWriters.writeEdges(dir.resolve(EDGES), edges);
         writeTraces(dir.resolve(TRACES), result);
         ConfigFile.write(dir.resolve(CONFIG), config, "effective configuration of the scan that wrote this folder");

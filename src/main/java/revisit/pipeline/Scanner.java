@@ -128,21 +128,24 @@ public final class Scanner {
         }
     }
 
-    /** Traces whose closure the consistency check found conflicting get that stage. */
+    /** Traces of verified queries take the stage the consistency check gave their closure. */
     static List<QueryTrace> markConflicts(List<QueryTrace> traces, List<Closure> closures) {
-        java.util.Set<Long> conflicting = new java.util.HashSet<>();
+        Map<Long, ClosureStatus> status = new HashMap<>();
         for (Closure c : closures) {
-            if (c.status() == ClosureStatus.CONFLICTING) {
-                conflicting.add(((long) c.querySequence() << 32) | c.queryFrame());
+            if (c.status() != ClosureStatus.REJECTED) {
+                status.put(((long) c.querySequence() << 32) | c.queryFrame(), c.status());
             }
         }
         List<QueryTrace> out = new ArrayList<>(traces.size());
         for (QueryTrace t : traces) {
-            boolean hit = t.stage() == QueryStage.VERIFIED
-                    && conflicting.contains(((long) t.sequence() << 32) | t.frame());
-            out.add(hit ? new QueryTrace(t.sequence(), t.frame(), t.time(), QueryStage.CONFLICTING,
-                    t.matchSequence(), t.matchFrame(), t.score(), t.inliers(), "conflicting with other closures")
-                    : t);
+            ClosureStatus s = status.get(((long) t.sequence() << 32) | t.frame());
+            if (t.stage() != QueryStage.VERIFIED || s == null || s == ClosureStatus.TRUSTED) {
+                out.add(t);
+                continue;
+            }
+            QueryStage stage = s == ClosureStatus.CONFLICTING ? QueryStage.CONFLICTING : QueryStage.UNCHECKED;
+            out.add(new QueryTrace(t.sequence(), t.frame(), t.time(), stage, t.matchSequence(), t.matchFrame(),
+                    t.score(), t.inliers(), stage.name().toLowerCase(java.util.Locale.ROOT) + " by the consistency check"));
         }
         return out;
     }
