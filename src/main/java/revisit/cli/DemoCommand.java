@@ -23,9 +23,12 @@ import revisit.scenario.DriftingOdometry;
                 + "against its ground truth and write an HTML report.")
 final class DemoCommand implements Callable<Integer> {
 
-    /** Labels of the demo: centres within 5 m and viewing directions within 50 degrees (common practice). */
-    static final String MAX_DISTANCE_M = "5";
-    static final String MAX_ANGLE_DEG = "50";
+    /**
+     * Labels of the demo: camera centres within 7 m and viewing directions within 80 degrees. In the yard two
+     * cameras that close in place and heading see the same facade (checked by eye on the report's image pairs).
+     */
+    static final String MAX_DISTANCE_M = "7";
+    static final String MAX_ANGLE_DEG = "80";
 
     @Spec
     CommandSpec spec;
