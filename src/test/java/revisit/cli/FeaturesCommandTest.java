@@ -57,7 +57,7 @@ class FeaturesCommandTest {
         int code = run("features", dir.resolve("nothing.png").toString(), "-o", dir.resolve("x.png").toString());
         assertEquals(1, code);
         assertEquals(1, err.toString().strip().lines().count(), err.toString());
-        assertTrue(err.toString().contains("nothing.png: no such file"), err.toString());
+        assertTrue(err.toString().contains("nothing.png: image not found"), err.toString());
         assertTrue(Files.notExists(dir.resolve("x.png")));
     }
 
@@ -67,7 +67,7 @@ class FeaturesCommandTest {
         Files.writeString(text, "not a picture");
         int code = run("features", text.toString(), "-o", dir.resolve("x.png").toString());
         assertEquals(1, code);
-        assertTrue(err.toString().contains("notes.png: not an image format"), err.toString());
+        assertTrue(err.toString().contains("notes.png: not a recognised image format"), err.toString());
     }
 
     @Test
