@@ -1,10 +1,8 @@
 package revisit.cli;
 
-import boofcv.io.image.ConvertBufferedImage;
 import boofcv.struct.image.GrayU8;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import javax.imageio.ImageIO;
@@ -16,7 +14,7 @@ import revisit.features.FeatureConfig;
 import revisit.features.FeatureExtractor;
 import revisit.features.FrameFeatures;
 import revisit.io.AtomicFiles;
-import revisit.io.BadInputException;
+import revisit.io.ImageFiles;
 
 /** {@code revisit features}: detects the features of one image and draws them into a PNG to look at. */
 @Command(name = "features", mixinStandardHelpOptions = true,
@@ -58,7 +56,7 @@ public final class FeaturesCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         FeatureConfig config = config();
-        GrayU8 gray = readGray(image);
+        GrayU8 gray = ImageFiles.readGray(image);
         FrameFeatures features = new FeatureExtractor(config).extract(gray);
         BufferedImage picture = FeatureSketch.draw(gray, features);
         Path target = output != null ? output : Path.of(stem(image) + "-features.png");
@@ -79,27 +77,6 @@ public final class FeaturesCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new CommandLine.ParameterException(spec.commandLine(), e.getMessage(), e);
         }
-    }
-
-    /**
-     * Plain ImageIO read; to be replaced by the strict reader {@code revisit.io.ImageFiles.readGray(Path)} once it
-     * is in main.
-     */
-    static GrayU8 readGray(Path file) {
-        if (!Files.isRegularFile(file)) {
-            throw new BadInputException(file + ": no such file; check the path");
-        }
-        BufferedImage buffered;
-        try {
-            buffered = ImageIO.read(file.toFile());
-        } catch (IOException e) {
-            throw new BadInputException(file + ": could not be decoded (" + e.getMessage()
-                    + "); re-save it as PNG or JPEG", e);
-        }
-        if (buffered == null) {
-            throw new BadInputException(file + ": not an image format Java can read; convert it to PNG or JPEG");
-        }
-        return ConvertBufferedImage.convertFrom(buffered, (GrayU8) null);
     }
 
     private static String stem(Path file) {

@@ -41,7 +41,7 @@ public final class FeatureExtractor {
         this.pyramid = new ScalePyramid(config.levels(), config.scaleFactor(), 2 * config.borderPx() + 1,
                 config.blurSigma());
         this.detector = new CornerDetector(config);
-        this.selector = new SpreadSelector(config.gridCellPx());
+        this.selector = new SpreadSelector(config.gridCellPx(), config.cellCap());
         this.brief = new SteeredBrief(config.patternSeed(), config.angleBins());
         this.corners = new LevelCorners[config.levels()];
         for (int l = 0; l < corners.length; l++) {

@@ -4,21 +4,28 @@ import java.util.Arrays;
 
 /**
  * Picks a level's quota of corners so that they cover the image: the level is cut into square cells, and
- * corners are taken round by round, each round taking the best remaining corner of every cell, rounds in order and
- * corners within a round by score. The strongest corners overall still come first, but a textured corner of the
- * image cannot use up the whole quota. Ties are broken by candidate index, so the choice is deterministic.
+ * corners are taken round by round, each round taking up to {@code cellCap} of the best remaining corners of every
+ * cell, rounds in order and corners within a round by score. A textured part of the image cannot use up the whole
+ * quota, yet a cell of weak corners does not displace strong ones before other cells have given {@code cellCap}
+ * each (with a cap of 1 every cell gives its best corner first, which cost about a fifth of the repeatability on
+ * graf1/graf3; docs/FEATURES.md). Ties are broken by candidate index, so the choice is deterministic.
  * Not thread-safe: one instance per extractor.
  */
 final class SpreadSelector {
 
     private final int cellPx;
+    private final int cellCap;
     private long[] keys = new long[256];
     private int[] byRank = new int[256];
     private int[] cellCount = new int[64];
 
-    /** @param cellPx side of a cell, level pixels */
-    SpreadSelector(int cellPx) {
+    /**
+     * @param cellPx  side of a cell, level pixels
+     * @param cellCap corners a cell gives per round
+     */
+    SpreadSelector(int cellPx, int cellCap) {
         this.cellPx = cellPx;
+        this.cellCap = cellCap;
     }
 
     /**
@@ -52,7 +59,7 @@ final class SpreadSelector {
         for (int r = 0; r < n; r++) {
             int i = (int) keys[r];
             int cell = (corners.y(i) / cellPx) * cellsX + corners.x(i) / cellPx;
-            int round = cellCount[cell]++;
+            int round = cellCount[cell]++ / cellCap;
             keys[r] = ((long) round << 32) | r;
             byRank[r] = i;
         }

@@ -1,28 +1,19 @@
 package revisit.features;
 
-import java.util.SplittableRandom;
-
 /**
  * Steered BRIEF: 256 intensity comparisons between point pairs around a keypoint on a smoothed image, the pattern
  * turned by the keypoint's orientation (Calonder, Lepetit, Strecha and Fua, "BRIEF: Binary Robust Independent
  * Elementary Features", ECCV 2010; steering as in Rublee et al., ICCV 2011).
  *
- * <p>The pattern is our own: both points of each pair are drawn from an isotropic Gaussian with sigma = 31/5
- * pixels (Calonder et al.'s sampling "G II" for a 31-pixel patch), from a seeded generator, rejecting points
- * farther than {@value #PATTERN_RADIUS} pixels from the centre and pairs closer than 2 pixels (so that
- * rounding cannot merge them). For each of {@code angleBins} orientations the pattern is rotated once and rounded
- * to flat pixel offsets for a given row stride, so describing a keypoint is 512 table reads and 256 comparisons.
+ * <p>The pattern is our own ({@link BriefPattern}). For each of {@code angleBins} orientations it is rotated once
+ * and rounded to flat pixel offsets for a given row stride, so describing a keypoint is 512 table reads and 256
+ * comparisons.
  * Bit {@code b} is 1 when the first point of pair {@code b} is darker than the second; it is stored as bit
  * {@code b % 64} of long {@code b / 64}. Not thread-safe once {@link #prepare(int)} may rebuild the table.
  */
 final class SteeredBrief {
 
-    /** Largest distance of a pattern point from the centre, pixels; rotated and rounded, at most 14. */
-    static final int PATTERN_RADIUS = 13;
-    /** Pairs, one bit each. */
-    static final int PAIRS = FrameFeatures.DESCRIPTOR_BITS;
-    private static final double SIGMA = 31.0 / 5.0;
-    private static final double MIN_PAIR_DISTANCE = 2.0;
+    private static final int PAIRS = BriefPattern.PAIRS;
 
     private final int angleBins;
     /** Pattern points: x1, y1, x2, y2 per pair. */
@@ -36,35 +27,7 @@ final class SteeredBrief {
      */
     SteeredBrief(long seed, int angleBins) {
         this.angleBins = angleBins;
-        this.pattern = samplePattern(seed);
-    }
-
-    static double[] samplePattern(long seed) {
-        SplittableRandom random = new SplittableRandom(seed);
-        double[] p = new double[4 * PAIRS];
-        int pair = 0;
-        while (pair < PAIRS) {
-            double x1 = gaussian(random);
-            double y1 = gaussian(random);
-            double x2 = gaussian(random);
-            double y2 = gaussian(random);
-            boolean inside = x1 * x1 + y1 * y1 <= PATTERN_RADIUS * PATTERN_RADIUS
-                    && x2 * x2 + y2 * y2 <= PATTERN_RADIUS * PATTERN_RADIUS;
-            if (inside && Math.hypot(x2 - x1, y2 - y1) >= MIN_PAIR_DISTANCE) {
-                p[4 * pair] = x1;
-                p[4 * pair + 1] = y1;
-                p[4 * pair + 2] = x2;
-                p[4 * pair + 3] = y2;
-                pair++;
-            }
-        }
-        return p;
-    }
-
-    private static double gaussian(SplittableRandom random) {
-        double u1 = random.nextDouble();
-        double u2 = random.nextDouble();
-        return SIGMA * Math.sqrt(-2 * Math.log(1 - u1)) * Math.cos(2 * Math.PI * u2);
+        this.pattern = BriefPattern.create(seed);
     }
 
     /** Rebuilds the rotated offset table when the row stride changes. */
@@ -100,7 +63,7 @@ final class SteeredBrief {
      * Writes the descriptor of the keypoint at {@code centre}.
      *
      * @param smooth smoothed image with the stride given to {@link #prepare(int)}; the keypoint must lie at least
-     *               {@value #PATTERN_RADIUS} + 1 pixels from every edge
+     *               {@value BriefPattern#RADIUS} + 1 pixels from every edge
      * @param centre index of the keypoint pixel in {@code smooth}
      * @param bin    orientation bin from {@link #bin(double)}
      * @param out    receives 4 longs at {@code outOffset}; modified
