@@ -97,17 +97,7 @@ final class AdaptiveRansac {
             models.clear();
             sampler.fit(order, s, models);
             for (double[] m : models) {
-                double cost = 0;
-                int inliers = 0;
-                for (int q = 0; q < size && cost < bestCost; q++) {
-                    double e = residual.squared(m, pool[q]);
-                    if (e <= thresholdSq) {
-                        cost += e;
-                        inliers++;
-                    } else {
-                        cost += thresholdSq;
-                    }
-                }
+                double cost = cost(m, pool, residual, thresholdSq, bestCost);
                 if (cost < bestCost) {
                     Fit local = refine(pool, n, m, residual, refitter, thresholdSq, it);
                     bestCost = local.cost();
@@ -125,6 +115,16 @@ final class AdaptiveRansac {
             all[i] = i;
         }
         return Optional.of(refine(all, n, best, residual, refitter, thresholdSq, it));
+    }
+
+    /** MSAC cost of {@code m} over {@code pool}; stops early (returning at least {@code bound}) once it exceeds it. */
+    private static double cost(double[] m, int[] pool, Residual residual, double thresholdSq, double bound) {
+        double cost = 0;
+        for (int q = 0; q < pool.length && cost < bound; q++) {
+            double e = residual.squared(m, pool[q]);
+            cost += e <= thresholdSq ? e : thresholdSq;
+        }
+        return cost;
     }
 
     /** Samples needed to draw one all-inlier sample of size s with probability p when the inlier ratio is w. */

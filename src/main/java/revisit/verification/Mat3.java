@@ -58,24 +58,6 @@ final class Mat3 {
         return new double[]{v[0] / n, v[1] / n, v[2] / n};
     }
 
-    /** Frobenius norm. */
-    static double frobenius(double[] m) {
-        double s = 0;
-        for (double v : m) {
-            s += v * v;
-        }
-        return Math.sqrt(s);
-    }
-
-    /** Returns {@code m * s}. */
-    static double[] scale(double[] m, double s) {
-        double[] c = new double[m.length];
-        for (int i = 0; i < m.length; i++) {
-            c[i] = m[i] * s;
-        }
-        return c;
-    }
-
     /**
      * Rotation matrix of the rotation vector {@code w} (axis times angle, radians) by Rodrigues' formula.
      */
