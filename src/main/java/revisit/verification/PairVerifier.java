@@ -66,10 +66,16 @@ public final class PairVerifier {
                     : uncalibrated(ModelKind.HOMOGRAPHY, n, c.homography().get(), p::homographySq, scores, iterations);
             case ROTATION -> c.rotation().get().verification(n, scores, iterations, config);
         };
+        if (result.accepted() && result.inlierRatio() < config.minInlierRatio()) {
+            return withoutPose(Outcome.TOO_FEW_INLIERS, result);
+        }
         return result.accepted() && !InlierSpread.sufficient(p, result.inlierMatches(), config)
-                ? new Verification(Outcome.DEGENERATE, result.model(), n, result.inlierMatches(), result.model3x3(),
-                Optional.empty(), result.errors(), scores, iterations)
-                : result;
+                ? withoutPose(Outcome.DEGENERATE, result) : result;
+    }
+
+    private static Verification withoutPose(Outcome outcome, Verification v) {
+        return new Verification(outcome, v.model(), v.matchCount(), v.inlierMatches(), v.model3x3(),
+                Optional.empty(), v.errors(), v.selection(), v.iterations());
     }
 
     /** The fitted candidate models, their scores and the RANSAC samples drawn. */
