@@ -42,21 +42,37 @@ final class PoseRecovery {
         List<double[]> starts = new ArrayList<>();
         starts.add(fit.model());
         starts.addAll(fit.earlier());
-        double thresholdSq = config.inlierThresholdPx() * config.inlierThresholdPx();
         double bestCost = Double.POSITIVE_INFINITY;
-        Optional<Refined> best = Optional.empty();
+        Recovered best = new Recovered(Outcome.DEGENERATE, indices(fit.inliers()), Optional.empty(),
+                ResidualStats.none());
         for (double[] start : starts) {
-            Optional<Refined> r = refineFrom(p, start);
-            double cost = r.map(x -> AdaptiveRansac.classify(p.count, x.fundamental(), p::epipolarSq, thresholdSq,
-                    new boolean[p.count])).orElse(Double.POSITIVE_INFINITY);
+            Optional<Recovered> r = refineFrom(p, start).map(x -> finish(p, x.inliers(), x.state(), false));
+            double cost = r.map(x -> finalCost(p, x)).orElse(Double.POSITIVE_INFINITY);
             if (cost < bestCost) {
                 bestCost = cost;
-                best = r;
+                best = r.get();
             }
         }
-        return best.map(r -> finish(p, r.inliers(), r.state(), false))
-                .orElse(new Recovered(Outcome.DEGENERATE, indices(fit.inliers()), Optional.empty(),
-                        ResidualStats.none()));
+        return best;
+    }
+
+    /**
+     * MSAC cost of a finished pose over all matches: inliers in front of both cameras pay their squared Sampson
+     * distance, every other match the squared cut.
+     */
+    private double finalCost(PointPairs p, Recovered r) {
+        double cutSq = config.inlierThresholdPx() * config.inlierThresholdPx();
+        if (r.pose().isEmpty()) {
+            return r.outcome().accepted() ? Double.POSITIVE_INFINITY : p.count * cutSq;
+        }
+        RelativePose pose = r.pose().get();
+        double[] f = p.fundamentalFromEssential(Mat3.mul(Mat3.skew(pose.translationDirection().orElseThrow()),
+                pose.rotation()));
+        double cost = (p.count - r.inliers().length) * cutSq;
+        for (int i : r.inliers()) {
+            cost += Math.min(p.epipolarSq(f, i), cutSq);
+        }
+        return cost;
     }
 
     /** A refined pose, its inliers and its pixel fundamental matrix. */
