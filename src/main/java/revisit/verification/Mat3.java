@@ -48,6 +48,15 @@ final class Mat3 {
         return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
     }
 
+    /** Sum of products of all nine entries of two 3x3 matrices. */
+    static double dot9(double[] a, double[] b) {
+        double s = 0;
+        for (int k = 0; k < 9; k++) {
+            s += a[k] * b[k];
+        }
+        return s;
+    }
+
     static double norm(double[] v) {
         return Math.sqrt(dot(v, v));
     }
