@@ -183,6 +183,8 @@ public final class PairVerifier {
                                   ModelScores scores, int iterations, double[] model) {
         Outcome outcome = fit.inlierCount() < config.minInliers() ? Outcome.TOO_FEW_INLIERS : r.outcome();
         Optional<RelativePose> pose = outcome.accepted() ? r.pose() : Optional.empty();
-        return new Verification(outcome, kind, n, r.inliers(), model, pose, r.errors(), scores, iterations);
+        double[] refined = kind == ModelKind.ESSENTIAL ? pose.flatMap(x -> x.translationDirection()
+                .map(t -> Mat3.mul(Mat3.skew(t), x.rotation()))).orElse(model) : model;
+        return new Verification(outcome, kind, n, r.inliers(), refined, pose, r.errors(), scores, iterations);
     }
 }

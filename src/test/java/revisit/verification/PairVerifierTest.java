@@ -52,6 +52,8 @@ class PairVerifierTest {
             assertEquals(Outcome.ACCEPTED, v.outcome(), "seed " + seed);
             assertEquals(ModelKind.ESSENTIAL, v.model(), "seed " + seed);
             RelativePose pose = v.pose().orElseThrow();
+            double[] e = Mat3.mul(Mat3.skew(pose.translationDirection().orElseThrow()), pose.rotation());
+            assertArrayEquals(e, v.model3x3(), 1e-12, "seed " + seed + ": model is [t]x R of the pose");
             rot[seed - 1] = s.rotationErrorDeg(pose.rotation());
             dir[seed - 1] = s.translationErrorDeg(pose.translationDirection().orElseThrow());
             int wrong = 0;
