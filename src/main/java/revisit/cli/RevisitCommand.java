@@ -7,7 +7,17 @@ import picocli.CommandLine.Command;
 @Command(name = "revisit", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Finds where a camera sequence revisits a place, proves each revisit geometrically and "
                 + "exports verified closures for pose-graph optimizers.",
-        subcommands = {CommandLine.HelpCommand.class, FeaturesCommand.class, VerifyPairCommand.class})
+        subcommands = {
+                CommandLine.HelpCommand.class,
+                DemoCommand.class,
+                ScanCommand.class,
+                EvaluateCommand.class,
+                TuneCommand.class,
+                VocabTrainCommand.class,
+                VocabInfoCommand.class,
+                FeaturesCommand.class,
+                VerifyPairCommand.class,
+                MakeScenarioCommand.class})
 public final class RevisitCommand implements Runnable {
 
     @CommandLine.Spec

@@ -41,6 +41,10 @@ public final class AtomicFiles {
                 body.write(out);
                 out.flush();
             }
+            if (tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+                // createTempFile makes the file owner-only (0600); outputs are ordinary files (0644, common practice)
+                Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+            }
             try (var fc = java.nio.channels.FileChannel.open(tmp, java.nio.file.StandardOpenOption.WRITE)) {
                 fc.force(true);
             }

@@ -86,7 +86,7 @@ public final class FrameSources {
     }
 
     /** Image files directly in {@code folder} (not hidden, known extension), in natural name order. */
-    static List<Path> listImages(Path folder) {
+    public static List<Path> listImages(Path folder) {
         List<Path> images = new ArrayList<>();
         int others = 0;
         try (Stream<Path> files = Files.list(folder)) {

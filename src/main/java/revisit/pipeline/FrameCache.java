@@ -73,6 +73,29 @@ public final class FrameCache implements AutoCloseable {
         }
     }
 
+    /**
+     * Reads every complete record of a checkpoint without opening it for writing and whatever its fingerprint
+     * (used by tuning, which reuses a finished scan's features and words).
+     */
+    public static List<FrameRecord> readRecords(Path file) {
+        if (!Files.exists(file)) {
+            throw new BadInputException(file + ": scan checkpoint not found; run 'revisit scan' into that folder"
+                    + " first (its checkpoint holds the features that tuning reuses)");
+        }
+        try (DataInputStream in = new DataInputStream(new BufferedInputStream(Files.newInputStream(file)))) {
+            if (Files.size(file) < HEADER_BYTES || in.readInt() != MAGIC) {
+                throw new BadInputException(file + ": not a revisit checkpoint");
+            }
+            in.readInt();
+            long fingerprint = in.readLong();
+            List<FrameRecord> out = new ArrayList<>();
+            readExisting(file, fingerprint, out);
+            return out;
+        } catch (IOException e) {
+            throw new UncheckedIOException(file + ": cannot read checkpoint (" + e.getMessage() + ")", e);
+        }
+    }
+
     /** Records recovered when the file was opened, in scan order. */
     public List<FrameRecord> recovered() {
         return List.copyOf(records);

@@ -1,0 +1,156 @@
+package revisit.pipeline;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalInt;
+import revisit.camera.CameraModel;
+import revisit.index.Candidate;
+import revisit.index.FrameWords;
+import revisit.index.MatchGroup;
+import revisit.index.QueryResult;
+import revisit.index.RevisitSearch;
+import revisit.verification.PairVerifier;
+import revisit.verification.Verification;
+
+/**
+ * The ordered, stateful part of the scan for one frame: add to the database and query it, apply the temporal
+ * consistency verdict, verify the confirmed candidate(s) geometrically, and emit a closure.
+ */
+final class QueryStep {
+
+    private final ScanConfig config;
+    private final RevisitSearch search;
+    private final boolean keepRejected;
+    private final StageTimes times;
+    private final PairCheck check;
+    private final ClosureFactory factory;
+    private final Map<Long, FrameRecord> frames = new HashMap<>();
+    private final List<Closure> closures = new ArrayList<>();
+    private final List<QueryTrace> traces = new ArrayList<>();
+
+    /** Verifies one (query, match) pair; the scan uses the verifier directly, tuning puts a cache in front. */
+    @FunctionalInterface
+    interface PairCheck {
+        Verification verify(FrameRecord query, FrameRecord match);
+    }
+
+    QueryStep(ScanConfig config, RevisitSearch search, Optional<CameraModel> camera, boolean keepRejected,
+              StageTimes times) {
+        this(config, search, keepRejected, times, direct(config, camera));
+    }
+
+    QueryStep(ScanConfig config, RevisitSearch search, boolean keepRejected, StageTimes times, PairCheck check) {
+        this.config = config;
+        this.search = search;
+        this.keepRejected = keepRejected;
+        this.times = times;
+        this.check = check;
+        this.factory = new ClosureFactory(config.verification());
+    }
+
+    static PairCheck direct(ScanConfig config, Optional<CameraModel> camera) {
+        PairVerifier verifier = new PairVerifier(config.verification());
+        return (q, m) -> verifier.verify(q.features(), q.nodes(), m.features(), m.nodes(), camera);
+    }
+
+    List<Closure> closures() {
+        return List.copyOf(closures);
+    }
+
+    List<QueryTrace> traces() {
+        return List.copyOf(traces);
+    }
+
+    QueryTrace handle(FrameRecord r) {
+        long t0 = System.nanoTime();
+        QueryResult qr = search.addAndQuery(new FrameWords(r.sequence(), r.frame(), r.time(), r.words(), r.nodes()));
+        times.add(StageTimes.Stage.QUERY, System.nanoTime() - t0);
+        frames.put(key(r.sequence(), r.frame()), r);
+        QueryTrace trace;
+        if (qr.candidates().isEmpty()) {
+            trace = new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.NO_CANDIDATE, -1, -1, 0,
+                    OptionalInt.empty(), "no candidate outside the exclusion window");
+        } else if (qr.confirmedMatch().isEmpty()) {
+            Candidate best = qr.chosenGroup().map(MatchGroup::best).orElse(qr.candidates().get(0));
+            trace = new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.PROPOSED, best.sequenceId(),
+                    best.frameId(), best.normalisedScore(), OptionalInt.empty(), qr.consistency().reason());
+        } else {
+            long t1 = System.nanoTime();
+            trace = verify(r, qr);
+            times.add(StageTimes.Stage.VERIFY, System.nanoTime() - t1);
+        }
+        times.add(StageTimes.Stage.TOTAL, System.nanoTime() - t0);
+        traces.add(trace);
+        return trace;
+    }
+
+    private QueryTrace verify(FrameRecord r, QueryResult qr) {
+        List<Candidate> tries = candidatesToTry(qr);
+        Candidate last = tries.get(0);
+        Verification lastV = null;
+        for (Candidate c : tries) {
+            FrameRecord m = frames.get(key(c.sequenceId(), c.frameId()));
+            Verification v = check.verify(r, m);
+            last = c;
+            lastV = v;
+            String refusal = refusal(v, c);
+            Closure closure = factory.build(r, m, c.rawScore(), c.normalisedScore(), v, refusal);
+            if (refusal.isEmpty()) {
+                closures.add(closure);
+                return new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.VERIFIED, c.sequenceId(),
+                        c.frameId(), c.normalisedScore(), OptionalInt.of(v.inlierCount()), "accepted");
+            }
+            if (keepRejected) {
+                closures.add(closure);
+            }
+        }
+        return new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.CONSISTENT, last.sequenceId(),
+                last.frameId(), last.normalisedScore(), OptionalInt.of(lastV.inlierCount()), refusal(lastV, last));
+    }
+
+    /**
+     * Why a verification does not make a closure, or "" when it does: the verifier's own verdict, then the
+     * inlier minimum (applied here too so a verifier run with a lower minimum can be reused), the inlier ratio
+     * and the score threshold of the scan settings.
+     */
+    private String refusal(Verification v, Candidate c) {
+        if (!v.accepted()) {
+            return v.outcome().name().toLowerCase(java.util.Locale.ROOT);
+        }
+        if (v.inlierCount() < config.verification().minInliers()) {
+            return "too_few_inliers";
+        }
+        if (v.inlierRatio() < config.scan().minInlierRatio()) {
+            return "low_inlier_ratio";
+        }
+        if (c.normalisedScore() < config.scan().minScore()) {
+            return "below_score_threshold";
+        }
+        return "";
+    }
+
+    /** The chosen group's best frame, then its next best members, up to the configured count. */
+    private List<Candidate> candidatesToTry(QueryResult qr) {
+        MatchGroup g = qr.chosenGroup().orElseThrow();
+        List<Candidate> tries = new ArrayList<>();
+        tries.add(g.best());
+        for (Candidate c : qr.candidates()) {
+            if (tries.size() >= config.scan().verifyTopCandidates()) {
+                break;
+            }
+            boolean inGroup = c.sequenceId() == g.sequenceId() && c.frameId() >= g.firstFrameId()
+                    && c.frameId() <= g.lastFrameId();
+            if (inGroup && !(c.frameId() == g.best().frameId())) {
+                tries.add(c);
+            }
+        }
+        return tries;
+    }
+
+    private static long key(int sequence, int frame) {
+        return ((long) sequence << 32) | (frame & 0xffffffffL);
+    }
+}
