@@ -47,6 +47,8 @@ public class VerificationBenchmark {
     private int[] nodesA;
     private int[] nodesB;
     private Correspondences matches;
+    private FrameFeatures far1;
+    private FrameFeatures far2;
     private CameraModel camera;
     private PairVerifier verifier;
     private DescriptorMatcher matcher;
@@ -60,6 +62,8 @@ public class VerificationBenchmark {
                 Double.parseDouble(f[2]), Double.parseDouble(f[3]), Double.parseDouble(f[6]), 0, 0, 0, 0, 0);
         a = features(dir.resolve(f[0]));
         b = features(dir.resolve(lines.get(8).trim().split("\\s+")[0]));
+        far1 = features(dir.resolve(lines.get(2).trim().split("\\s+")[0]));
+        far2 = features(dir.resolve(lines.get(3).trim().split("\\s+")[0]));
         nodesA = topBits(a);
         nodesB = topBits(b);
         VerificationConfig config = VerificationConfig.defaults();
@@ -84,6 +88,12 @@ public class VerificationBenchmark {
     @Benchmark
     public Verification verifyOnly() {
         return verifier.verify(a, b, matches, Optional.of(camera));
+    }
+
+    /** A candidate that must be rejected: templeSR0002 / templeSR0003, 54 degrees apart (RANSAC runs to its cap). */
+    @Benchmark
+    public Verification matchAndRejectFarPair() {
+        return verifier.verify(far1, far2, Optional.of(camera));
     }
 
     @Benchmark

@@ -28,6 +28,7 @@ public final class VerificationCpuTime {
             report("verifyOnly", mx, 200, b::verifyOnly);
             report("matchAndVerify", mx, 200, b::matchAndVerify);
             report("matchWithinNodesAndVerify", mx, 200, b::matchWithinNodesAndVerify);
+            report("matchAndRejectFarPair", mx, 20, b::matchAndRejectFarPair);
         }
         Correspondences all = b.matchBruteForce();
         Correspondences nodes = b.matchWithinNodes();
@@ -37,6 +38,9 @@ public final class VerificationCpuTime {
                 va.model(), va.inlierCount(), va.iterations());
         System.out.printf("within nodes: %d matches, %s %s, %d inliers, %d samples%n", nodes.count(), vn.outcome(),
                 vn.model(), vn.inlierCount(), vn.iterations());
+        Verification far = b.matchAndRejectFarPair();
+        System.out.printf("far pair: %d matches, %s %s, %d inliers, %d samples%n", far.matchCount(), far.outcome(),
+                far.model(), far.inlierCount(), far.iterations());
         Optional.of(mx).ifPresent(m -> System.out.println("load " + ManagementFactory.getOperatingSystemMXBean()
                 .getSystemLoadAverage()));
     }

@@ -40,9 +40,14 @@ final class AdaptiveRansac {
      * @param inlierCount number of true entries of {@code inliers}
      * @param cost        MSAC cost, pixels squared
      * @param iterations  samples drawn
+     * @param earlier     models that were best earlier in the run, most recent first, at most {@link #EARLIER}
      */
-    record Fit(double[] model, boolean[] inliers, int inlierCount, double cost, int iterations) {
+    record Fit(double[] model, boolean[] inliers, int inlierCount, double cost, int iterations,
+               List<double[]> earlier) {
     }
+
+    /** Earlier best models kept for a caller that refines several starts. */
+    static final int EARLIER = 3;
 
     private AdaptiveRansac() {
     }
@@ -81,6 +86,7 @@ final class AdaptiveRansac {
         SplittableRandom random = new SplittableRandom(config.seed());
         int[] order = pool.clone();
         List<double[]> models = new ArrayList<>();
+        List<double[]> earlier = new ArrayList<>();
         double[] best = null;
         double bestCost = Double.POSITIVE_INFINITY;
         int bestInliers = 0;
@@ -97,19 +103,15 @@ final class AdaptiveRansac {
             models.clear();
             sampler.fit(order, s, models);
             for (double[] m : models) {
-                double cost = 0;
-                int inliers = 0;
-                for (int q = 0; q < size && cost < bestCost; q++) {
-                    double e = residual.squared(m, pool[q]);
-                    if (e <= thresholdSq) {
-                        cost += e;
-                        inliers++;
-                    } else {
-                        cost += thresholdSq;
-                    }
-                }
+                double cost = cost(m, pool, residual, thresholdSq, bestCost);
                 if (cost < bestCost) {
                     Fit local = refine(pool, n, m, residual, refitter, thresholdSq, it);
+                    if (best != null) {
+                        earlier.add(0, best);
+                        if (earlier.size() > EARLIER) {
+                            earlier.remove(EARLIER);
+                        }
+                    }
                     bestCost = local.cost();
                     best = local.model();
                     bestInliers = local.inlierCount();
@@ -124,7 +126,18 @@ final class AdaptiveRansac {
         for (int i = 0; i < n; i++) {
             all[i] = i;
         }
-        return Optional.of(refine(all, n, best, residual, refitter, thresholdSq, it));
+        Fit fit = refine(all, n, best, residual, refitter, thresholdSq, it);
+        return Optional.of(new Fit(fit.model(), fit.inliers(), fit.inlierCount(), fit.cost(), it, List.copyOf(earlier)));
+    }
+
+    /** MSAC cost of {@code m} over {@code pool}; stops early (returning at least {@code bound}) once it exceeds it. */
+    private static double cost(double[] m, int[] pool, Residual residual, double thresholdSq, double bound) {
+        double cost = 0;
+        for (int q = 0; q < pool.length && cost < bound; q++) {
+            double e = residual.squared(m, pool[q]);
+            cost += e <= thresholdSq ? e : thresholdSq;
+        }
+        return cost;
     }
 
     /** Samples needed to draw one all-inlier sample of size s with probability p when the inlier ratio is w. */
@@ -175,7 +188,7 @@ final class AdaptiveRansac {
         for (boolean b : inliers) {
             count += b ? 1 : 0;
         }
-        return new Fit(model, inliers, count, cost, iterations);
+        return new Fit(model, inliers, count, cost, iterations, List.of());
     }
 
     private static double classify(int[] points, double[] model, Residual residual, double thresholdSq,

@@ -47,14 +47,7 @@ public final class DescriptorMatcher {
     private Correspondences match(FrameFeatures a, int[] nodesA, FrameFeatures b, int[] nodesB) {
         long[] keysA = sortedKeys(nodesA, a.count());
         long[] keysB = sortedKeys(nodesB, b.count());
-        int[] bestOfA = new int[a.count()];
-        int[] bestDistA = new int[a.count()];
-        int[] secondDistA = new int[a.count()];
-        int[] bestOfB = new int[b.count()];
-        int[] bestDistB = new int[b.count()];
-        Arrays.fill(bestOfA, -1);
-        Arrays.fill(bestOfB, -1);
-        Arrays.fill(bestDistB, Integer.MAX_VALUE);
+        Nearest best = new Nearest(a.count(), b.count());
         int ia = 0;
         int ib = 0;
         while (ia < keysA.length && ib < keysB.length) {
@@ -63,39 +56,7 @@ public final class DescriptorMatcher {
             int endA = groupEnd(keysA, ia);
             int endB = groupEnd(keysB, ib);
             if (nodeA == nodeB) {
-                long[] da = a.descriptors();
-                long[] db = b.descriptors();
-                for (int p = ia; p < endA; p++) {
-                    int i = (int) keysA[p];
-                    int base = i * FrameFeatures.STRIDE;
-                    long a0 = da[base];
-                    long a1 = da[base + 1];
-                    long a2 = da[base + 2];
-                    long a3 = da[base + 3];
-                    int best = Integer.MAX_VALUE;
-                    int second = Integer.MAX_VALUE;
-                    int bestJ = -1;
-                    for (int q = ib; q < endB; q++) {
-                        int j = (int) keysB[q];
-                        int jb = j * FrameFeatures.STRIDE;
-                        int d = Long.bitCount(a0 ^ db[jb]) + Long.bitCount(a1 ^ db[jb + 1])
-                                + Long.bitCount(a2 ^ db[jb + 2]) + Long.bitCount(a3 ^ db[jb + 3]);
-                        if (d < best) {
-                            second = best;
-                            best = d;
-                            bestJ = j;
-                        } else if (d < second) {
-                            second = d;
-                        }
-                        if (d < bestDistB[j]) {
-                            bestDistB[j] = d;
-                            bestOfB[j] = i;
-                        }
-                    }
-                    bestOfA[i] = bestJ;
-                    bestDistA[i] = best;
-                    secondDistA[i] = second;
-                }
+                matchGroup(a.descriptors(), keysA, ia, endA, b.descriptors(), keysB, ib, endB, best);
             }
             if (nodeA <= nodeB) {
                 ia = endA;
@@ -104,7 +65,63 @@ public final class DescriptorMatcher {
                 ib = endB;
             }
         }
-        return accept(bestOfA, bestDistA, secondDistA, bestOfB);
+        return accept(best.ofA, best.distA, best.secondA, best.ofB);
+    }
+
+    /** Nearest neighbours found so far: per a feature its best b, distance and second distance; per b its best a. */
+    private static final class Nearest {
+        final int[] ofA;
+        final int[] distA;
+        final int[] secondA;
+        final int[] ofB;
+        final int[] distB;
+
+        Nearest(int countA, int countB) {
+            ofA = new int[countA];
+            distA = new int[countA];
+            secondA = new int[countA];
+            ofB = new int[countB];
+            distB = new int[countB];
+            Arrays.fill(ofA, -1);
+            Arrays.fill(ofB, -1);
+            Arrays.fill(distB, Integer.MAX_VALUE);
+        }
+    }
+
+    /** Compares every a feature of keysA[ia, endA) with every b feature of keysB[ib, endB). */
+    private static void matchGroup(long[] da, long[] keysA, int ia, int endA, long[] db, long[] keysB, int ib,
+                                   int endB, Nearest n) {
+        for (int p = ia; p < endA; p++) {
+            int i = (int) keysA[p];
+            int base = i * FrameFeatures.STRIDE;
+            long a0 = da[base];
+            long a1 = da[base + 1];
+            long a2 = da[base + 2];
+            long a3 = da[base + 3];
+            int best = Integer.MAX_VALUE;
+            int second = Integer.MAX_VALUE;
+            int bestJ = -1;
+            for (int q = ib; q < endB; q++) {
+                int j = (int) keysB[q];
+                int jb = j * FrameFeatures.STRIDE;
+                int d = Long.bitCount(a0 ^ db[jb]) + Long.bitCount(a1 ^ db[jb + 1])
+                        + Long.bitCount(a2 ^ db[jb + 2]) + Long.bitCount(a3 ^ db[jb + 3]);
+                if (d < best) {
+                    second = best;
+                    best = d;
+                    bestJ = j;
+                } else if (d < second) {
+                    second = d;
+                }
+                if (d < n.distB[j]) {
+                    n.distB[j] = d;
+                    n.ofB[j] = i;
+                }
+            }
+            n.ofA[i] = bestJ;
+            n.distA[i] = best;
+            n.secondA[i] = second;
+        }
     }
 
     private Correspondences accept(int[] bestOfA, int[] bestDistA, int[] secondDistA, int[] bestOfB) {

@@ -48,6 +48,15 @@ final class Mat3 {
         return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
     }
 
+    /** Sum of products of all nine entries of two 3x3 matrices. */
+    static double dot9(double[] a, double[] b) {
+        double s = 0;
+        for (int k = 0; k < 9; k++) {
+            s += a[k] * b[k];
+        }
+        return s;
+    }
+
     static double norm(double[] v) {
         return Math.sqrt(dot(v, v));
     }
@@ -56,24 +65,6 @@ final class Mat3 {
     static double[] unit(double[] v) {
         double n = norm(v);
         return new double[]{v[0] / n, v[1] / n, v[2] / n};
-    }
-
-    /** Frobenius norm. */
-    static double frobenius(double[] m) {
-        double s = 0;
-        for (double v : m) {
-            s += v * v;
-        }
-        return Math.sqrt(s);
-    }
-
-    /** Returns {@code m * s}. */
-    static double[] scale(double[] m, double s) {
-        double[] c = new double[m.length];
-        for (int i = 0; i < m.length; i++) {
-            c[i] = m[i] * s;
-        }
-        return c;
     }
 
     /**

@@ -50,44 +50,62 @@ public final class PairVerifier {
             return Verification.rejected(Outcome.TOO_FEW_MATCHES, n, ModelScores.none(), 0);
         }
         PointPairs p = PointPairs.of(a, b, matches, camera);
+        Candidates c = fitCandidates(p);
+        ModelScores scores = c.scores();
+        int iterations = c.iterations();
+        Verification result = switch (choose(scores, p.calibrated())) {
+            case NONE -> Verification.rejected(Outcome.DEGENERATE, n, scores, iterations);
+            case ESSENTIAL -> fromPose(ModelKind.ESSENTIAL, n, c.epipolar().get(),
+                    poses.fromEssential(p, c.epipolar().get()), scores, iterations,
+                    p.essentialFromFundamental(c.epipolar().get().model()));
+            case FUNDAMENTAL -> uncalibrated(ModelKind.FUNDAMENTAL, n, c.epipolar().get(), p::epipolarSq, scores,
+                    iterations);
+            case HOMOGRAPHY -> p.calibrated()
+                    ? fromPose(ModelKind.HOMOGRAPHY, n, c.homography().get(), poses.fromPlane(p, c.homography().get()),
+                    scores, iterations, c.homography().get().model())
+                    : uncalibrated(ModelKind.HOMOGRAPHY, n, c.homography().get(), p::homographySq, scores, iterations);
+            case ROTATION -> c.rotation().get().verification(n, scores, iterations, config);
+        };
+        if (result.accepted() && result.inlierRatio() < config.minInlierRatio()) {
+            return withoutPose(Outcome.TOO_FEW_INLIERS, result);
+        }
+        return result.accepted() && !InlierSpread.sufficient(p, result.inlierMatches(), config)
+                ? withoutPose(Outcome.DEGENERATE, result) : result;
+    }
+
+    private static Verification withoutPose(Outcome outcome, Verification v) {
+        return new Verification(outcome, v.model(), v.matchCount(), v.inlierMatches(), v.model3x3(),
+                Optional.empty(), v.errors(), v.selection(), v.iterations());
+    }
+
+    /** The fitted candidate models, their scores and the RANSAC samples drawn. */
+    private record Candidates(Optional<AdaptiveRansac.Fit> epipolar, Optional<AdaptiveRansac.Fit> homography,
+                              Optional<RotationFit> rotation, ModelScores scores, int iterations) {
+    }
+
+    private Candidates fitCandidates(PointPairs p) {
+        int n = p.count;
         double tF = config.inlierThresholdPx() * config.inlierThresholdPx();
         double tH = config.homographyThresholdPx() * config.homographyThresholdPx();
-        AdaptiveRansac.Residual epipolarError = p::epipolarSq;
-        AdaptiveRansac.Residual homographyError = p::homographySq;
         Optional<AdaptiveRansac.Fit> epipolar = p.calibrated()
-                ? AdaptiveRansac.run(n, fitters.essential(p), epipolarError, fitters.essentialRefit(p), tF, config)
-                : AdaptiveRansac.run(n, fitters.fundamental(p, config.fundamentalSolver()), epipolarError,
+                ? AdaptiveRansac.run(n, fitters.essential(p), p::epipolarSq, fitters.essentialRefit(p), tF, config)
+                : AdaptiveRansac.run(n, fitters.fundamental(p, config.fundamentalSolver()), p::epipolarSq,
                 fitters.fundamentalRefit(p), tF, config);
-        Optional<AdaptiveRansac.Fit> homography = fitHomography(p, epipolar, homographyError, tH);
+        Optional<AdaptiveRansac.Fit> homography = fitHomography(p, epipolar, p::homographySq, tH);
         double sigma = config.noiseSigmaPx();
         ModelSelection.Candidate epipolarKind = p.calibrated() ? ModelSelection.Candidate.ESSENTIAL
                 : ModelSelection.Candidate.FUNDAMENTAL;
-        double epipolarGric = epipolar.map(f -> gric(epipolarKind, f.model(), epipolarError, n, sigma))
+        double epipolarGric = epipolar.map(f -> gric(epipolarKind, f.model(), p::epipolarSq, n, sigma))
                 .orElse(Double.NaN);
         double homographyGric = homography.map(h -> gric(ModelSelection.Candidate.HOMOGRAPHY, h.model(),
-                homographyError, n, sigma)).orElse(Double.NaN);
+                p::homographySq, n, sigma)).orElse(Double.NaN);
         Optional<RotationFit> rotation = p.calibrated() && rotationCanWin(epipolarGric, homographyGric, n)
                 ? homography.flatMap(h -> RotationFit.of(p, h, config)) : Optional.empty();
         int iterations = epipolar.map(AdaptiveRansac.Fit::iterations).orElse(0)
                 + homography.map(AdaptiveRansac.Fit::iterations).orElse(0);
         ModelScores scores = new ModelScores(epipolarGric, homographyGric,
                 rotation.map(RotationFit::gric).orElse(Double.NaN));
-        ModelKind kind = choose(scores, p.calibrated());
-        Verification result = switch (kind) {
-            case NONE -> Verification.rejected(Outcome.DEGENERATE, n, scores, iterations);
-            case ESSENTIAL -> fromPose(kind, n, epipolar.get(), poses.fromEssential(p, epipolar.get()), scores,
-                    iterations, p.essentialFromFundamental(epipolar.get().model()));
-            case FUNDAMENTAL -> uncalibrated(kind, n, epipolar.get(), epipolarError, scores, iterations);
-            case HOMOGRAPHY -> p.calibrated()
-                    ? fromPose(kind, n, homography.get(), poses.fromPlane(p, homography.get()), scores, iterations,
-                    homography.get().model())
-                    : uncalibrated(kind, n, homography.get(), homographyError, scores, iterations);
-            case ROTATION -> rotation.get().verification(n, scores, iterations, config);
-        };
-        return result.accepted() && !InlierSpread.sufficient(p, result.inlierMatches(), config)
-                ? new Verification(Outcome.DEGENERATE, result.model(), n, result.inlierMatches(), result.model3x3(),
-                Optional.empty(), result.errors(), scores, iterations)
-                : result;
+        return new Candidates(epipolar, homography, rotation, scores, iterations);
     }
 
     /**
@@ -165,6 +183,8 @@ public final class PairVerifier {
                                   ModelScores scores, int iterations, double[] model) {
         Outcome outcome = fit.inlierCount() < config.minInliers() ? Outcome.TOO_FEW_INLIERS : r.outcome();
         Optional<RelativePose> pose = outcome.accepted() ? r.pose() : Optional.empty();
-        return new Verification(outcome, kind, n, r.inliers(), model, pose, r.errors(), scores, iterations);
+        double[] refined = kind == ModelKind.ESSENTIAL ? pose.flatMap(x -> x.translationDirection()
+                .map(t -> Mat3.mul(Mat3.skew(t), x.rotation()))).orElse(model) : model;
+        return new Verification(outcome, kind, n, r.inliers(), refined, pose, r.errors(), scores, iterations);
     }
 }

@@ -10,7 +10,8 @@ import java.util.Optional;
  * @param matchCount    putative matches given to RANSAC
  * @param inlierMatches indices into the putative matches (not feature indices) of the final inliers, ascending
  * @param model3x3      the fitted matrix, row-major: F (pixels, undistorted when a camera was given), E (normalised
- *                      coordinates), H (pixels) or R; empty when no model
+ *                      coordinates, {@code [t]x R} of the refined pose when accepted), H (pixels, undistorted
+ *                      when a camera was given) or R; empty when no model
  * @param pose          relative pose with information matrix; present only for accepted calibrated pairs
  * @param errors        inlier error statistics under the final model
  * @param selection     model-selection scores (GRIC) of the candidate models

@@ -11,6 +11,9 @@ package revisit.verification;
  *                           the 12 of Galvez-Lopez &amp; Tardos, IEEE T-RO 2012: on the Middlebury dino ring
  *                           (Seitz et al., CVPR 2006) wrong pairs reached 12-19 inliers and true ones 25 and more
  *                           (docs/SCAN.md); on the invented yard every trusted closure had at least 22
+ * @param minInlierRatio     fewest inliers as a share of the putative matches, in [0, 1), typical 0.1-0.3;
+ *                           default 0.1 (common practice). Guards against chance support in large match sets:
+ *                           300 random matches gave 13 essential-matrix inliers here, above {@code minInliers}
  * @param inlierThresholdPx  inlier cut on the Sampson distance of epipolar models, pixels, typical 1-4; default
  *                           2.0 = sqrt(3.84) sigma for sigma = 1 px (Hartley &amp; Zisserman 2004, Table 4.2). The
  *                           homography cut is this times sqrt(5.99 / 3.84) (two degrees of freedom), and the
@@ -23,7 +26,8 @@ package revisit.verification;
  * @param fundamentalSolver  minimal solver for the uncalibrated model; default seven points (fewer samples)
  * @param seed               RANSAC random seed; the same seed and input give the same result
  */
-public record VerificationConfig(double ratio, int maxHammingBits, int minInliers, double inlierThresholdPx,
+public record VerificationConfig(double ratio, int maxHammingBits, int minInliers, double minInlierRatio,
+                                 double inlierThresholdPx,
                                  double confidence, int maxIterations, int refineIterations,
                                  FundamentalSolver fundamentalSolver, long seed) {
 
@@ -46,6 +50,9 @@ public record VerificationConfig(double ratio, int maxHammingBits, int minInlier
             throw new IllegalArgumentException("minInliers must be >= 8 (the largest minimal sample), was "
                     + minInliers);
         }
+        if (!(minInlierRatio >= 0 && minInlierRatio < 1)) {
+            throw new IllegalArgumentException("minInlierRatio must be in [0, 1), was " + minInlierRatio);
+        }
         if (!(inlierThresholdPx > 0) || !Double.isFinite(inlierThresholdPx)) {
             throw new IllegalArgumentException("inlierThresholdPx must be positive, was " + inlierThresholdPx);
         }
@@ -65,52 +72,58 @@ public record VerificationConfig(double ratio, int maxHammingBits, int minInlier
 
     /** The documented defaults. */
     public static VerificationConfig defaults() {
-        return new VerificationConfig(0.8, 80, 20, 2.0, 0.99, 1000, 20, FundamentalSolver.SEVEN_POINT, 20120601L);
+        return new VerificationConfig(0.8, 80, 20, 0.1, 2.0, 0.99, 1000, 20, FundamentalSolver.SEVEN_POINT,
+                20120601L);
     }
 
     public VerificationConfig withRatio(double v) {
-        return new VerificationConfig(v, maxHammingBits, minInliers, inlierThresholdPx, confidence, maxIterations,
-                refineIterations, fundamentalSolver, seed);
+        return new VerificationConfig(v, maxHammingBits, minInliers, minInlierRatio, inlierThresholdPx, confidence,
+                maxIterations, refineIterations, fundamentalSolver, seed);
     }
 
     public VerificationConfig withMaxHammingBits(int v) {
-        return new VerificationConfig(ratio, v, minInliers, inlierThresholdPx, confidence, maxIterations,
-                refineIterations, fundamentalSolver, seed);
+        return new VerificationConfig(ratio, v, minInliers, minInlierRatio, inlierThresholdPx, confidence,
+                maxIterations, refineIterations, fundamentalSolver, seed);
     }
 
     public VerificationConfig withMinInliers(int v) {
-        return new VerificationConfig(ratio, maxHammingBits, v, inlierThresholdPx, confidence, maxIterations,
-                refineIterations, fundamentalSolver, seed);
+        return new VerificationConfig(ratio, maxHammingBits, v, minInlierRatio, inlierThresholdPx, confidence,
+                maxIterations, refineIterations, fundamentalSolver, seed);
+    }
+
+    public VerificationConfig withMinInlierRatio(double v) {
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, v, inlierThresholdPx, confidence,
+                maxIterations, refineIterations, fundamentalSolver, seed);
     }
 
     public VerificationConfig withInlierThresholdPx(double v) {
-        return new VerificationConfig(ratio, maxHammingBits, minInliers, v, confidence, maxIterations,
-                refineIterations, fundamentalSolver, seed);
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, minInlierRatio, v, confidence,
+                maxIterations, refineIterations, fundamentalSolver, seed);
     }
 
     public VerificationConfig withConfidence(double v) {
-        return new VerificationConfig(ratio, maxHammingBits, minInliers, inlierThresholdPx, v, maxIterations,
-                refineIterations, fundamentalSolver, seed);
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, minInlierRatio, inlierThresholdPx, v,
+                maxIterations, refineIterations, fundamentalSolver, seed);
     }
 
     public VerificationConfig withMaxIterations(int v) {
-        return new VerificationConfig(ratio, maxHammingBits, minInliers, inlierThresholdPx, confidence, v,
-                refineIterations, fundamentalSolver, seed);
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, minInlierRatio, inlierThresholdPx,
+                confidence, v, refineIterations, fundamentalSolver, seed);
     }
 
     public VerificationConfig withRefineIterations(int v) {
-        return new VerificationConfig(ratio, maxHammingBits, minInliers, inlierThresholdPx, confidence,
-                maxIterations, v, fundamentalSolver, seed);
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, minInlierRatio, inlierThresholdPx,
+                confidence, maxIterations, v, fundamentalSolver, seed);
     }
 
     public VerificationConfig withFundamentalSolver(FundamentalSolver v) {
-        return new VerificationConfig(ratio, maxHammingBits, minInliers, inlierThresholdPx, confidence,
-                maxIterations, refineIterations, v, seed);
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, minInlierRatio, inlierThresholdPx,
+                confidence, maxIterations, refineIterations, v, seed);
     }
 
     public VerificationConfig withSeed(long v) {
-        return new VerificationConfig(ratio, maxHammingBits, minInliers, inlierThresholdPx, confidence,
-                maxIterations, refineIterations, fundamentalSolver, v);
+        return new VerificationConfig(ratio, maxHammingBits, minInliers, minInlierRatio, inlierThresholdPx,
+                confidence, maxIterations, refineIterations, fundamentalSolver, v);
     }
 
     /** Inlier cut of the homography and rotation models, pixels (two degrees of freedom). */

@@ -93,6 +93,16 @@ class VerifyPairCommandTest {
     }
 
     @Test
+    void missingImageIsOneLineError() {
+        StringWriter err = new StringWriter();
+        int code = run(new StringWriter(), err, "verify-pair", tmp.resolve("nope.png").toString(),
+                tmp.resolve("nope2.png").toString(), "-o", tmp.resolve("y.png").toString());
+        assertEquals(1, code);
+        assertTrue(err.toString().contains("nope.png"), err.toString());
+        assertEquals(1, err.toString().strip().lines().count(), err.toString());
+    }
+
+    @Test
     void badRatioIsAUsageError() {
         StringWriter err = new StringWriter();
         assertEquals(2, run(new StringWriter(), err, "verify-pair", "a.png", "b.png", "--ratio", "1.5"));

@@ -52,6 +52,8 @@ class PairVerifierTest {
             assertEquals(Outcome.ACCEPTED, v.outcome(), "seed " + seed);
             assertEquals(ModelKind.ESSENTIAL, v.model(), "seed " + seed);
             RelativePose pose = v.pose().orElseThrow();
+            double[] e = Mat3.mul(Mat3.skew(pose.translationDirection().orElseThrow()), pose.rotation());
+            assertArrayEquals(e, v.model3x3(), 1e-12, "seed " + seed + ": model is [t]x R of the pose");
             rot[seed - 1] = s.rotationErrorDeg(pose.rotation());
             dir[seed - 1] = s.translationErrorDeg(pose.translationDirection().orElseThrow());
             int wrong = 0;
@@ -201,9 +203,11 @@ class PairVerifierTest {
     }
 
     @Test
-    void sameSeedGivesTheSameResult() {
+    void sameSeedGivesTheSameResultWhenTheVerifierIsReused() {
         SyntheticPair s = general(8, 0.5);
-        Verification first = new PairVerifier(VerificationConfig.defaults()).verify(s.a, s.b, s.matches, CAMERA);
+        Verification first = verifier.verify(s.a, s.b, s.matches, CAMERA);
+        SyntheticPair other = general(9, 0.3);
+        verifier.verify(other.a, other.b, other.matches, CAMERA);
         Verification second = verifier.verify(s.a, s.b, s.matches, CAMERA);
         assertArrayEquals(first.inlierMatches(), second.inlierMatches());
         assertArrayEquals(first.pose().orElseThrow().rotation(), second.pose().orElseThrow().rotation());

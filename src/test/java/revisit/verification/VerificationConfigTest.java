@@ -1,0 +1,40 @@
+package revisit.verification;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import org.junit.jupiter.api.Test;
+
+class VerificationConfigTest {
+
+    @Test
+    void defaultsAreThePublishedValues() {
+        VerificationConfig c = VerificationConfig.defaults();
+        assertEquals(0.8, c.ratio());
+        assertEquals(12, c.minInliers(), "Galvez-Lopez & Tardos, IEEE T-RO 2012");
+        assertEquals(2.0, c.inlierThresholdPx());
+        assertEquals(1.0, c.noiseSigmaPx() * Math.sqrt(3.84) / 2.0, 1e-12);
+        assertEquals(2.0 * Math.sqrt(5.99 / 3.84), c.homographyThresholdPx(), 1e-12);
+    }
+
+    @Test
+    void copiesChangeOneField() {
+        VerificationConfig c = VerificationConfig.defaults().withSeed(7).withMinInlierRatio(0.2);
+        assertEquals(7, c.seed());
+        assertEquals(0.2, c.minInlierRatio());
+        assertEquals(VerificationConfig.defaults().confidence(), c.confidence());
+    }
+
+    @Test
+    void rejectsOutOfRangeValues() {
+        VerificationConfig d = VerificationConfig.defaults();
+        assertThrows(IllegalArgumentException.class, () -> d.withRatio(1.5));
+        assertThrows(IllegalArgumentException.class, () -> d.withMinInliers(7));
+        assertThrows(IllegalArgumentException.class, () -> d.withMinInlierRatio(1.0));
+        assertThrows(IllegalArgumentException.class, () -> d.withInlierThresholdPx(0));
+        assertThrows(IllegalArgumentException.class, () -> d.withConfidence(1.0));
+        assertThrows(IllegalArgumentException.class, () -> d.withMaxIterations(0));
+        assertThrows(IllegalArgumentException.class, () -> d.withMaxHammingBits(257));
+        assertThrows(IllegalArgumentException.class, () -> d.withFundamentalSolver(null));
+    }
+}
