@@ -45,7 +45,8 @@ final class FrameScorer {
             }
         }
         // Many postings touch most slots: then a branch-free walk and a sequential sweep of all slots beat keeping
-        // a list of touched slots (whose first-touch branch mispredicts often).
+        // a list of touched slots, whose first-touch branch mispredicts often. Measured at 100k synthetic frames
+        // (thread CPU time, same JVM, docs/INDEX.md): p50 1.25 ms swept against 2.58 ms with the touched list.
         boolean sweep = postings >= frames.slotCount() / 2;
         lastSwept = sweep;
         int touchedCount = 0;
@@ -59,15 +60,19 @@ final class FrameScorer {
         }
         top.reset(config.maxCandidates());
         if (sweep) {
-            for (int slot = 0; slot < frames.slotCount(); slot++) {
-                consider(slot, query.norm(), queryFrame, frames, config);
-            }
+            sweep(query.norm(), queryFrame, frames, config);
         } else {
             for (int t = 0; t < touchedCount; t++) {
                 consider(touched[t], query.norm(), queryFrame, frames, config);
             }
         }
         return finish(skipped, skippedWeight, query);
+    }
+
+    /** Bytes of the scratch buffers. */
+    long memoryBytes() {
+        return Sizes.array(cells.length, 4) + Sizes.array(touched.length, 4) + Sizes.array(walkedWords.length, 4)
+                + Sizes.array(skippedWords.length, 4);
     }
 
     /** Whether the last query swept all slots (else it kept a touched list); for tests. */
@@ -124,17 +129,29 @@ final class FrameScorer {
         return n;
     }
 
+    /**
+     * Visits every slot, zeroing its accumulator; only scores reaching the top list's current entry bar go further,
+     * so the loop's one branch is rarely taken once the list is full.
+     */
+    private void sweep(ScoreNorm norm, FrameWords queryFrame, FrameTable frames, IndexConfig config) {
+        float[] c = cells;
+        double bar = top.entryBar();
+        for (int slot = 0, at = 0; slot < frames.slotCount(); slot++, at += 2) {
+            float score = norm == ScoreNorm.L2 ? c[at] * c[at + 1] : c[at];
+            c[at] = 0f;
+            if (score >= bar && frames.eligible(slot, queryFrame, config)) {
+                top.offer(slot, score);
+                bar = top.entryBar();
+            }
+        }
+    }
+
     /** Offers a slot's score to the top list and zeroes its accumulator for the next query. */
     private void consider(int slot, ScoreNorm norm, FrameWords queryFrame, FrameTable frames, IndexConfig config) {
-        double score = cells[2 * slot];
-        if (score == 0) {
-            return;
-        }
-        cells[2 * slot] = 0f;
-        if (norm == ScoreNorm.L2) {
-            score *= cells[2 * slot + 1];
-        }
-        if (top.mayEnter(score) && frames.eligible(slot, queryFrame, config)) {
+        int at = 2 * slot;
+        float score = norm == ScoreNorm.L2 ? cells[at] * cells[at + 1] : cells[at];
+        cells[at] = 0f;
+        if (score >= top.entryBar() && frames.eligible(slot, queryFrame, config)) {
             top.offer(slot, score);
         }
     }
