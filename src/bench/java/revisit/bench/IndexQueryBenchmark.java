@@ -42,7 +42,7 @@ public class IndexQueryBenchmark {
     @Param({"1000000"})
     public int vocabulary;
 
-    @Param({"1.0", "0.1"})
+    @Param({"1.0", "0.05"})
     public double maxWordFrameFraction;
 
     @Param({"2000"})

@@ -24,34 +24,23 @@ final class FrameScorer {
     private int[] skippedWords = new int[0];
     private final TopFrames top = new TopFrames();
     private boolean lastSwept;
+    private int walkedCount;
+    private int skippedCount;
+    private double skippedWeight;
 
     RankedFrames rank(WordVector query, FrameWords queryFrame, InvertedIndex index, FrameTable frames,
                       WordWeights weights, IndexConfig config) {
         reserve(frames, query.size());
-        long limit = stopListLimit(config, frames.liveCount());
-        int walked = 0;
-        int skipped = 0;
-        long postings = 0;
-        double skippedWeight = 0;
-        int[] words = query.words();
-        for (int i = 0; i < words.length; i++) {
-            int length = index.length(words[i]);
-            if (length > limit) {
-                skippedWords[skipped++] = i;
-                skippedWeight += query.weights()[i];
-            } else if (length > 0) {
-                walkedWords[walked++] = i;
-                postings += length;
-            }
-        }
+        long postings = splitWords(query, index, stopListLimit(config, frames.liveCount()));
         // Many postings touch most slots: then a branch-free walk and a sequential sweep of all slots beat keeping
-        // a list of touched slots (whose first-touch branch mispredicts often).
+        // a list of touched slots, whose first-touch branch mispredicts often. Measured at 100k synthetic frames
+        // (thread CPU time, same JVM, docs/INDEX.md): p50 1.25 ms swept against 2.58 ms with the touched list.
         boolean sweep = postings >= frames.slotCount() / 2;
         lastSwept = sweep;
         int touchedCount = 0;
-        for (int k = 0; k < walked; k++) {
+        for (int k = 0; k < walkedCount; k++) {
             int i = walkedWords[k];
-            int w = words[i];
+            int w = query.words()[i];
             float idfW = weights.table()[w];
             touchedCount = query.norm() == ScoreNorm.L1
                     ? walkL1(index, w, query.weights()[i], idfW, touchedCount, !sweep)
@@ -59,15 +48,42 @@ final class FrameScorer {
         }
         top.reset(config.maxCandidates());
         if (sweep) {
-            for (int slot = 0; slot < frames.slotCount(); slot++) {
-                consider(slot, query.norm(), queryFrame, frames, config);
-            }
+            sweep(query.norm(), queryFrame, frames, config);
         } else {
             for (int t = 0; t < touchedCount; t++) {
                 consider(touched[t], query.norm(), queryFrame, frames, config);
             }
         }
-        return finish(skipped, skippedWeight, query);
+        return finish(query);
+    }
+
+    /**
+     * Sorts the query's words into walked ones and stop words (lists longer than {@code limit}).
+     *
+     * @return postings to walk
+     */
+    private long splitWords(WordVector query, InvertedIndex index, long limit) {
+        walkedCount = 0;
+        skippedCount = 0;
+        skippedWeight = 0;
+        long postings = 0;
+        for (int i = 0; i < query.size(); i++) {
+            int length = index.length(query.words()[i]);
+            if (length > limit) {
+                skippedWords[skippedCount++] = i;
+                skippedWeight += query.weights()[i];
+            } else if (length > 0) {
+                walkedWords[walkedCount++] = i;
+                postings += length;
+            }
+        }
+        return postings;
+    }
+
+    /** Bytes of the scratch buffers. */
+    long memoryBytes() {
+        return Sizes.array(cells.length, 4) + Sizes.array(touched.length, 4) + Sizes.array(walkedWords.length, 4)
+                + Sizes.array(skippedWords.length, 4);
     }
 
     /** Whether the last query swept all slots (else it kept a touched list); for tests. */
@@ -124,28 +140,40 @@ final class FrameScorer {
         return n;
     }
 
+    /**
+     * Visits every slot, zeroing its accumulator; only scores reaching the top list's current entry bar go further,
+     * so the loop's one branch is rarely taken once the list is full.
+     */
+    private void sweep(ScoreNorm norm, FrameWords queryFrame, FrameTable frames, IndexConfig config) {
+        float[] c = cells;
+        double bar = top.entryBar();
+        for (int slot = 0, at = 0; slot < frames.slotCount(); slot++, at += 2) {
+            float score = norm == ScoreNorm.L2 ? c[at] * c[at + 1] : c[at];
+            c[at] = 0f;
+            if (score >= bar && frames.eligible(slot, queryFrame, config)) {
+                top.offer(slot, score);
+                bar = top.entryBar();
+            }
+        }
+    }
+
     /** Offers a slot's score to the top list and zeroes its accumulator for the next query. */
     private void consider(int slot, ScoreNorm norm, FrameWords queryFrame, FrameTable frames, IndexConfig config) {
-        double score = cells[2 * slot];
-        if (score == 0) {
-            return;
-        }
-        cells[2 * slot] = 0f;
-        if (norm == ScoreNorm.L2) {
-            score *= cells[2 * slot + 1];
-        }
-        if (top.mayEnter(score) && frames.eligible(slot, queryFrame, config)) {
+        int at = 2 * slot;
+        float score = norm == ScoreNorm.L2 ? cells[at] * cells[at + 1] : cells[at];
+        cells[at] = 0f;
+        if (score >= top.entryBar() && frames.eligible(slot, queryFrame, config)) {
             top.offer(slot, score);
         }
     }
 
-    private RankedFrames finish(int skipped, double skippedWeight, WordVector query) {
+    private RankedFrames finish(WordVector query) {
         int n = top.size();
         int[] slots = new int[n];
         double[] scores = new double[n];
         top.drainBestFirst(slots, scores);
-        int[] stopWords = new int[skipped];
-        for (int k = 0; k < skipped; k++) {
+        int[] stopWords = new int[skippedCount];
+        for (int k = 0; k < skippedCount; k++) {
             stopWords[k] = query.words()[skippedWords[k]];
         }
         return new RankedFrames(slots, scores, stopWords, skippedWeight);

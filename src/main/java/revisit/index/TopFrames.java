@@ -21,9 +21,12 @@ final class TopFrames {
         size = 0;
     }
 
-    /** Whether a pair with this score could still enter (cheap pre-check before eligibility tests). */
-    boolean mayEnter(double score) {
-        return size < capacity || score >= scores[0];
+    /**
+     * Lowest score that may still enter: the worst kept score once full (ties enter and are settled by slot),
+     * else the smallest positive float, so that zero scores never enter.
+     */
+    double entryBar() {
+        return size < capacity ? Float.MIN_VALUE : scores[0];
     }
 
     void offer(int slot, double score) {
