@@ -37,12 +37,21 @@ public final class ClosureChecks {
                                       Map<String, List<StampedPose>> odometry, ConsistencyConfig config) {
         List<ClosureConstraint> constraints = new ArrayList<>();
         Map<String, String> notCheckable = new HashMap<>();
+        Map<Integer, String> againstOdometry = new HashMap<>();
+        OdometryGate gate = new OdometryGate(odometry, config);
         for (int i = 0; i < closures.size(); i++) {
             Closure c = closures.get(i);
             if (c.status() == ClosureStatus.REJECTED) {
                 continue;
             }
-            if (java.util.Arrays.stream(c.information()).allMatch(v -> v == 0)) {
+            if (hasPose(c)) {
+                var contradiction = gate.contradiction(c, names);
+                if (contradiction.isPresent()) {
+                    againstOdometry.put(i, contradiction.get());
+                    continue;
+                }
+            }
+            if (!hasPose(c)) {
                 notCheckable.put(String.valueOf(i), "no relative pose to check (give a camera file)");
                 continue;
             }
@@ -64,6 +73,9 @@ public final class ClosureChecks {
             ClosureVerdict v = verdicts.get(String.valueOf(i));
             if (c.status() == ClosureStatus.REJECTED) {
                 out.add(c);
+            } else if (againstOdometry.containsKey(i)) {
+                String reason = c.reason().isEmpty() ? againstOdometry.get(i) : c.reason() + "; " + againstOdometry.get(i);
+                out.add(c.withStatus(ClosureStatus.CONFLICTING, reason, 0));
             } else if (v == null) {
                 out.add(c.withStatus(ClosureStatus.UNCHECKED, notCheckable.getOrDefault(String.valueOf(i),
                         "not checkable"), c.confidence() * 0.5));
@@ -72,6 +84,10 @@ public final class ClosureChecks {
             }
         }
         return out;
+    }
+
+    private static boolean hasPose(Closure c) {
+        return !java.util.Arrays.stream(c.information()).allMatch(v -> v == 0);
     }
 
     private static Closure withVerdict(Closure c, ClosureVerdict v) {
