@@ -17,6 +17,7 @@ import picocli.CommandLine.Command;
                 VocabInfoCommand.class,
                 FeaturesCommand.class,
                 VerifyPairCommand.class,
+                BenchCommand.class,
                 MakeScenarioCommand.class})
 public final class RevisitCommand implements Runnable {
 
