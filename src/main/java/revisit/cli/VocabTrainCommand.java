@@ -142,8 +142,17 @@ final class VocabTrainCommand implements Callable<Integer> {
             }
         }
         return String.format(Locale.ROOT, "%s (%d frames%s, %d descriptors%s)", input, frames,
-                video ? ", every " + videoStep + "th" : "", set.count() - before,
+                video && videoStep > 1 ? ", every " + ordinal(videoStep) : "", set.count() - before,
                 bad > 0 ? ", " + bad + " unreadable frames skipped" : "");
+    }
+
+    /** 2 -> "2nd", 5 -> "5th", 11 -> "11th", 21 -> "21st". */
+    static String ordinal(int n) {
+        int lastTwo = n % 100;
+        int last = n % 10;
+        String suffix = lastTwo >= 11 && lastTwo <= 13 ? "th"
+                : last == 1 ? "st" : last == 2 ? "nd" : last == 3 ? "rd" : "th";
+        return n + suffix;
     }
 
     static String descriptorKind(FeatureConfig f) {
