@@ -62,23 +62,27 @@ public class VocabularyLookupBenchmark {
 
     @Benchmark
     @OperationsPerInvocation(FRAME)
-    public long wordPerDescriptor() {
+    public long wordPerDescriptor(CpuTimeCounters cpu) {
+        long cpuStart = CpuTimeCounters.now();
         long sum = 0;
         int start = offset;
         for (int i = 0; i < FRAME; i++) {
             sum += vocabulary.word(query, start + i);
         }
         offset = (start + FRAME) % (100_000 - FRAME);
+        cpu.add(cpuStart, FRAME);
         return sum;
     }
 
     /** Frame lookup with the ancestor at level 3 (the words and nodes a database query needs). */
     @Benchmark
     @OperationsPerInvocation(FRAME)
-    public int[] frameLookupPerDescriptor() {
+    public int[] frameLookupPerDescriptor(CpuTimeCounters cpu) {
+        long start = CpuTimeCounters.now();
         FrameFeatures frame = frames[nextFrame];
         nextFrame = (nextFrame + 1) % frames.length;
         vocabulary.lookup(frame, 3, words, nodes);
+        cpu.add(start, FRAME);
         return words;
     }
 

@@ -8,7 +8,6 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -17,13 +16,11 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import revisit.features.FeatureConfig;
-import revisit.features.FeatureExtractor;
-import revisit.features.FrameFeatures;
 import revisit.io.BadFrameException;
-import revisit.io.Frame;
 import revisit.io.FrameSource;
 import revisit.io.FrameSourceOptions;
 import revisit.io.FrameSources;
+import revisit.vocabulary.TrainingFrames;
 import revisit.vocabulary.TrainingOrigin;
 import revisit.vocabulary.TrainingSet;
 import revisit.vocabulary.Vocabulary;
@@ -60,7 +57,8 @@ final class VocabTrainCommand implements Callable<Integer> {
     @Option(names = "--seed", description = "Seed of the k-means++ seeding (default ${DEFAULT-VALUE}).")
     private long seed = VocabularyConfig.defaults().seed();
 
-    @Option(names = "--threads", description = "Training threads (default: all processors, ${DEFAULT-VALUE}).")
+    @Option(names = "--threads",
+            description = "Threads for feature extraction and training (default: all processors, ${DEFAULT-VALUE}).")
     private int threads = VocabularyConfig.defaults().threads();
 
     @Option(names = "--video-step", paramLabel = "N",
@@ -84,12 +82,12 @@ final class VocabTrainCommand implements Callable<Integer> {
         FeatureConfig features = FeatureConfig.defaults();
         TrainingSet.Builder set = new TrainingSet.Builder();
         List<String> sources = new ArrayList<>();
-        for (Path input : inputs) {
-            if (set.count() >= maxDescriptors) {
-                sources.add(input + " (not read: --max-descriptors " + maxDescriptors + " reached)");
-                continue;
+        try (TrainingFrames extraction = new TrainingFrames(features, config.threads())) {
+            for (Path input : inputs) {
+                sources.add(set.count() >= maxDescriptors
+                        ? input + " (not read: --max-descriptors " + maxDescriptors + " reached)"
+                        : collect(input, extraction, set));
             }
-            sources.add(collect(input, new FeatureExtractor(features), set));
         }
         TrainingOrigin origin = new TrainingOrigin(descriptorKind(features), sources,
                 "revisit " + String.join(" ", spec.commandLine().getParseResult().originalArgs()),
@@ -115,35 +113,37 @@ final class VocabTrainCommand implements Callable<Integer> {
     }
 
     /** Adds the descriptors of every usable frame of {@code input}; returns the provenance line. */
-    private String collect(Path input, FeatureExtractor extractor, TrainingSet.Builder set) {
+    private String collect(Path input, TrainingFrames extraction, TrainingSet.Builder set) {
         boolean video = FrameSources.VIDEO_EXTENSIONS.contains(extension(input));
         FrameSourceOptions options = FrameSourceOptions.defaults().withStride(video ? videoStep : 1);
-        int frames = 0;
-        int bad = 0;
-        int before = set.count();
+        TrainingFrames.Collected got;
         try (FrameSource source = FrameSources.open(input, options);
              ProgressDisplay bar = ProgressDisplay.open(input.getFileName().toString(), !quiet)) {
             bar.maxHint(source.frameCount().orElse(-1));
-            while (set.count() < maxDescriptors) {
-                Optional<Frame> frame;
-                try {
-                    frame = source.next();
-                } catch (BadFrameException e) {
-                    bad++;
-                    spec.commandLine().getErr().println("revisit: skipped " + e.getMessage());
-                    continue;
+            got = extraction.collect(source, set, maxDescriptors, new TrainingFrames.Listener() {
+                @Override
+                public void frameAdded(int frames) {
+                    bar.stepTo(frames);
                 }
-                if (frame.isEmpty()) {
-                    break;
+
+                @Override
+                public void frameSkipped(BadFrameException problem) {
+                    spec.commandLine().getErr().println("revisit: skipped " + problem.getMessage());
                 }
-                FrameFeatures f = extractor.extract(frame.get().image());
-                set.add(f.descriptors(), Math.min(f.count(), maxDescriptors - set.count()));
-                bar.stepTo(++frames);
-            }
+            });
         }
-        return String.format(Locale.ROOT, "%s (%d frames%s, %d descriptors%s)", input, frames,
-                video ? ", every " + videoStep + "th" : "", set.count() - before,
-                bad > 0 ? ", " + bad + " unreadable frames skipped" : "");
+        return String.format(Locale.ROOT, "%s (%d frames%s, %d descriptors%s)", input, got.frames(),
+                video && videoStep > 1 ? ", every " + ordinal(videoStep) : "", got.descriptors(),
+                got.badFrames() > 0 ? ", " + got.badFrames() + " unreadable frames skipped" : "");
+    }
+
+    /** 2 -> "2nd", 5 -> "5th", 11 -> "11th", 21 -> "21st". */
+    static String ordinal(int n) {
+        int lastTwo = n % 100;
+        int last = n % 10;
+        String suffix = lastTwo >= 11 && lastTwo <= 13 ? "th"
+                : last == 1 ? "st" : last == 2 ? "nd" : last == 3 ? "rd" : "th";
+        return n + suffix;
     }
 
     static String descriptorKind(FeatureConfig f) {

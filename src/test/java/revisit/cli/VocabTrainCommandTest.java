@@ -98,6 +98,15 @@ class VocabTrainCommandTest {
     }
 
     @Test
+    void namesTheVideoStepAsAnOrdinal() {
+        assertEquals("2nd", VocabTrainCommand.ordinal(2));
+        assertEquals("3rd", VocabTrainCommand.ordinal(3));
+        assertEquals("5th", VocabTrainCommand.ordinal(5));
+        assertEquals("12th", VocabTrainCommand.ordinal(12));
+        assertEquals("21st", VocabTrainCommand.ordinal(21));
+    }
+
+    @Test
     void reportsAMissingInputInOneLine() {
         StringWriter err = new StringWriter();
         int code = run(new StringWriter(), err, "vocab-train", dir.resolve("nowhere").toString(), "-o",

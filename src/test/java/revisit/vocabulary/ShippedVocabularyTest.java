@@ -7,8 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayDeque;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import revisit.features.Hamming;
 import revisit.io.BadInputException;
 
 /** The vocabulary shipped in vocab/ (see vocab/README.md for how it was trained). */
@@ -30,6 +33,45 @@ class ShippedVocabularyTest {
                 v.provenance().command());
         long sources = v.provenance().sources().stream().filter(s -> s.startsWith("../shared/data/")).count();
         assertEquals(6, sources);
+    }
+
+    @Test
+    void flatLookupMatchesAPlainDescentThroughTheShippedTree() {
+        Vocabulary v = VocabularyFile.read(SHIPPED);
+        int n = v.nodeCount();
+        int[] firstChild = new int[n];
+        for (int i = 0, next = 1; i < n; i++) {
+            firstChild[i] = next;
+            next += v.childCount(i);
+        }
+        int[] wordOfNode = new int[n];
+        int words = 0;
+        ArrayDeque<Integer> stack = new ArrayDeque<>(List.of(0));
+        while (!stack.isEmpty()) {
+            int node = stack.pop();
+            if (v.childCount(node) == 0) {
+                wordOfNode[node] = words++;
+            }
+            for (int c = v.childCount(node) - 1; c >= 0; c--) {
+                stack.push(firstChild[node] + c);
+            }
+        }
+        assertEquals(v.wordCount(), words);
+        long[] queries = SyntheticDescriptors.random(2000, 17);
+        for (int q = 0; q < 2000; q++) {
+            int node = 0;
+            while (v.childCount(node) > 0) {
+                int best = firstChild[node];
+                for (int c = firstChild[node]; c < firstChild[node] + v.childCount(node); c++) {
+                    int d = Hamming.distance(v.centre(c), 0, queries, q);
+                    if (d < Hamming.distance(v.centre(best), 0, queries, q)) {
+                        best = c;
+                    }
+                }
+                node = best;
+            }
+            assertEquals(wordOfNode[node], v.word(queries, q), "query " + q);
+        }
     }
 
     @Test

@@ -62,6 +62,7 @@ final class SyntheticDescriptors {
 
     /** A fixed origin so that trained files are comparable byte for byte. */
     static TrainingOrigin origin() {
-        return new TrainingOrigin("test-descriptor", List.of("synthetic"), "test", Instant.parse("2025-01-01T00:00:00Z"));
+        return new TrainingOrigin("test-descriptor", List.of("synthetic"), "test",
+                Instant.parse("2025-01-01T00:00:00Z"));
     }
 }
