@@ -21,6 +21,8 @@ import revisit.features.FeatureConfig;
 import revisit.features.FeatureExtractor;
 import revisit.features.FrameFeatures;
 import revisit.io.ImageFiles;
+import revisit.vocabulary.Vocabulary;
+import revisit.vocabulary.VocabularyFile;
 import revisit.verification.Correspondences;
 import revisit.verification.DescriptorMatcher;
 import revisit.verification.PairVerifier;
@@ -41,6 +43,9 @@ import revisit.verification.VerificationConfig;
 @Fork(1)
 @Threads(1)
 public class VerificationBenchmark {
+
+    /** Vocabulary level whose nodes restrict matching: the scan default (ScanSettings.matchingNodeLevel). */
+    static final int NODE_LEVEL = 2;
 
     private FrameFeatures a;
     private FrameFeatures b;
@@ -64,8 +69,9 @@ public class VerificationBenchmark {
         b = features(dir.resolve(lines.get(8).trim().split("\\s+")[0]));
         far1 = features(dir.resolve(lines.get(2).trim().split("\\s+")[0]));
         far2 = features(dir.resolve(lines.get(3).trim().split("\\s+")[0]));
-        nodesA = topBits(a);
-        nodesB = topBits(b);
+        Vocabulary vocabulary = VocabularyFile.read(Path.of(System.getProperty("user.dir")).resolve("vocab/default.rvoc"));
+        nodesA = nodes(vocabulary, a);
+        nodesB = nodes(vocabulary, b);
         VerificationConfig config = VerificationConfig.defaults();
         verifier = new PairVerifier(config);
         matcher = new DescriptorMatcher(config);
@@ -106,11 +112,11 @@ public class VerificationBenchmark {
         return matcher.matchWithinNodes(a, nodesA, b, nodesB);
     }
 
-    static int[] topBits(FrameFeatures f) {
+    /** Node of each feature at level 2 of the vocabulary (the scan's default matching level). */
+    static int[] nodes(Vocabulary vocabulary, FrameFeatures f) {
+        int[] words = new int[f.count()];
         int[] nodes = new int[f.count()];
-        for (int i = 0; i < f.count(); i++) {
-            nodes[i] = (int) (f.descriptors()[i * FrameFeatures.STRIDE] >>> 58);
-        }
+        vocabulary.lookup(f, NODE_LEVEL, words, nodes);
         return nodes;
     }
 
