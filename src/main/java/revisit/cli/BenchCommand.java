@@ -67,12 +67,12 @@ final class BenchCommand implements Callable<Integer> {
             description = "Use at most N frames of each session (after the stride).")
     int frames;
 
-    @Option(names = "--max-distance", split = ",", defaultValue = DemoCommand.MAX_DISTANCE_M + ",7",
+    @Option(names = "--max-distance", split = ",", defaultValue = "5," + DemoCommand.MAX_DISTANCE_M,
             paramLabel = "M", description = "Label rules: camera centres within M metres, one rule per value, paired "
-            + "with --max-angle (default: the demo's and a looser one, ${DEFAULT-VALUE}).")
+            + "with --max-angle (default: a stricter one and the demo's, ${DEFAULT-VALUE}).")
     List<Double> maxDistance;
 
-    @Option(names = "--max-angle", split = ",", defaultValue = DemoCommand.MAX_ANGLE_DEG + ",80",
+    @Option(names = "--max-angle", split = ",", defaultValue = "50," + DemoCommand.MAX_ANGLE_DEG,
             paramLabel = "DEG", description = "Label rules: viewing directions within DEG degrees, paired with "
             + "--max-distance (default: ${DEFAULT-VALUE}).")
     List<Double> maxAngle;
