@@ -12,6 +12,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import revisit.SharedData;
 import revisit.pipeline.ScanOutputs;
 
 /**
@@ -26,15 +27,7 @@ class ScanResumeTest {
 
     @Test
     void killedScanResumesToTheSameClosures() throws Exception {
-        Path ring = null;
-        for (String base : new String[]{"../shared/data", "../../shared/data", "/work/shared/data"}) {
-            Path p = Path.of(System.getProperty("user.dir")).resolve(base).resolve("middlebury/dinoRing").normalize();
-            if (Files.isDirectory(p)) {
-                ring = p;
-                break;
-            }
-        }
-        assumeTrue(ring != null, "../shared/data/middlebury/dinoRing not found; skipped");
+        Path ring = SharedData.require("middlebury/dinoRing");
         Path vocab = Path.of(System.getProperty("user.dir")).resolve("vocab/default.rvoc");
         assumeTrue(Files.exists(vocab), "vocab/default.rvoc not found; skipped");
         List<String> args = List.of("scan", ring.toString(), "--vocabulary", vocab.toString(), "--quiet",

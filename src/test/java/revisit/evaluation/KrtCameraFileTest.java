@@ -1,5 +1,6 @@
 package revisit.evaluation;
 
+import revisit.SharedData;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

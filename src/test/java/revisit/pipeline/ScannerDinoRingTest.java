@@ -1,5 +1,6 @@
 package revisit.pipeline;
 
+import revisit.SharedData;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import georegression.struct.se.Se3_F64;

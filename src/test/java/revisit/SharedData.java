@@ -1,4 +1,4 @@
-package revisit.evaluation;
+package revisit;
 
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
@@ -6,13 +6,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 /** Finds ../shared/data (see its README.md) from the project root or a worktree; skips the test when absent. */
-final class SharedData {
+public final class SharedData {
 
     private SharedData() {
     }
 
     /** The shared data folder holding {@code relative}, or a skipped test. */
-    static Path require(String relative) {
+    public static Path require(String relative) {
         Path root = Path.of(System.getProperty("user.dir"));
         for (Path base : new Path[]{root.resolve("../shared/data"), root.resolve("../../shared/data"),
                 Path.of("/work/shared/data")}) {
