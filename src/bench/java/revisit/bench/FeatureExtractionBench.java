@@ -81,6 +81,7 @@ public class FeatureExtractionBench {
 
         @Setup
         public void create() {
+            nu.pattern.OpenCV.loadLocally();
             orb = ORB.create(1000);
             keypoints = new MatOfKeyPoint();
             descriptors = new Mat();
