@@ -2,9 +2,7 @@ package revisit.scenario;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import georegression.geometry.ConvertRotation3D_F64;
 import georegression.struct.se.Se3_F64;
-import georegression.struct.so.Quaternion_F64;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -47,7 +45,7 @@ class MetricClosuresOnScenarioTest {
 
     private static Scenario scenario;
     private static ScanResult result;
-    private static List<List<StampedPose>> truth;
+    private static TruePoses truth;
 
     @BeforeAll
     static void scanWithDepth() {
@@ -57,7 +55,7 @@ class MetricClosuresOnScenarioTest {
         List<Path> frames = new ArrayList<>();
         Map<String, Path> depth = new HashMap<>();
         Map<String, List<StampedPose>> odometry = new HashMap<>();
-        truth = new ArrayList<>();
+        List<List<StampedPose>> poseLists = new ArrayList<>();
         List<SequenceInput> inputs = new ArrayList<>();
         for (Session ses : s.sessions()) {
             Path frameFolder = ScenarioWriter.framePath(dir, ses, 0).getParent();
@@ -66,16 +64,17 @@ class MetricClosuresOnScenarioTest {
             for (int i = 0; i < ses.frameCount(); i++) {
                 poses.add(ses.route().frame(i, ses.rateHz()));
             }
-            truth.add(poses);
+            poseLists.add(poses);
         }
         inputs.addAll(SequenceInput.ofAll(frames));
         for (int k = 0; k < inputs.size(); k++) {
             Session ses = s.sessions().get(k);
             depth.put(inputs.get(k).name(), ScenarioWriter.depthPath(dir, ses, 0).getParent());
             // 1 % step-length error, 0.1 degree per step: the demo's simulated odometry.
-            odometry.put(inputs.get(k).name(), DriftingOdometry.simulate(truth.get(k), 0.01, Math.toRadians(0.1),
+            odometry.put(inputs.get(k).name(), DriftingOdometry.simulate(poseLists.get(k), 0.01, Math.toRadians(0.1),
                     7 + k));
         }
+        truth = new TruePoses(poseLists);
         Scanner scanner = new Scanner(ScanConfig.defaults(), VocabularyFile.read(Path.of("vocab/default.rvoc")),
                 Optional.of(s.camera()), Scanner.Options.defaults().withOdometry(odometry).withDepth(depth, 0.001));
         result = scanner.run(inputs, ScanListener.silent());
@@ -147,31 +146,12 @@ class MetricClosuresOnScenarioTest {
                 && c.matchSequence() == match.session() && Math.abs(c.matchFrame() - match.frame()) <= DECOY_FRAMES;
     }
 
-    /** The true match-from-query transform, from the generator's camera-to-world poses. */
     private static Se3_F64 relative(Closure c) {
-        Se3_F64 worldFromQuery = se3(truth.get(c.querySequence()).get(c.queryFrame()));
-        Se3_F64 worldFromMatch = se3(truth.get(c.matchSequence()).get(c.matchFrame()));
-        return worldFromQuery.concat(worldFromMatch.invert(null), null);
+        return truth.matchFromQuery(c.querySequence(), c.queryFrame(), c.matchSequence(), c.matchFrame());
     }
 
-    private static Se3_F64 se3(StampedPose p) {
-        Se3_F64 out = new Se3_F64();
-        ConvertRotation3D_F64.quaternionToMatrix(new Quaternion_F64(p.qw(), p.qx(), p.qy(), p.qz()), out.R);
-        out.T.setTo(p.x(), p.y(), p.z());
-        return out;
-    }
-
-    private static double rotationErrorDeg(Closure c, Se3_F64 truth) {
-        double[] q = c.quaternion();
-        DMatrixRMaj r = new DMatrixRMaj(3, 3);
-        ConvertRotation3D_F64.quaternionToMatrix(new Quaternion_F64(q[3], q[0], q[1], q[2]), r);
-        double trace = 0;
-        for (int i = 0; i < 3; i++) {
-            for (int k = 0; k < 3; k++) {
-                trace += r.get(k, i) * truth.R.get(k, i);
-            }
-        }
-        return Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, (trace - 1) / 2))));
+    private static double rotationErrorDeg(Closure c, Se3_F64 trueMatchFromQuery) {
+        return TruePoses.rotationErrorDeg(c.quaternion(), trueMatchFromQuery);
     }
 
     private static double sq(double v) {
