@@ -59,11 +59,47 @@ public final class RetrievalComparison {
         long wall0 = System.nanoTime();
         System.out.println("load average at start: " + loadAverage());
         IndexConfig indexConfig = IndexConfig.defaults();
+        Trained trained = train(o.trainSeed, indexConfig);
+        List<ScenarioDescriptors.SceneFrame> test = ScenarioDescriptors.describe(
+                Scenario.build(ScenarioConfig.small().withSeed(o.testSeed)));
+        RetrievalRecall.Run ourRun = RetrievalRecall.scan(new OurRetrieval(trained.vocabulary, indexConfig, 2),
+                test, 5);
+        RetrievalRecall.Run boofRun = RetrievalRecall.scan(trained.boof, test, 5);
+        trained.boof.clear();
+
+        DescriptorFrames frames = new DescriptorFrames(trained.set.descriptors(), trained.set.count(), PER_FRAME,
+                FLIP_BITS, FRAME_SEED);
+        List<RetrievalScale.Point> ours = RetrievalScale.run(new OurRetrieval(trained.vocabulary, indexConfig, 2),
+                frames, o.sizes, o.queries, o.rounds, KEEP);
+        System.gc();
+        int[] boofSizes = Arrays.stream(o.sizes).filter(s -> s <= o.boofMaxFrames).toArray();
+        List<RetrievalScale.Point> theirs = RetrievalScale.run(trained.boof, frames, boofSizes, o.queries, o.rounds,
+                KEEP);
+
+        RetrievalTable table = new RetrievalTable(System.out);
+        table.row("training wall s", trained.ourClocks[0] / 1e9, trained.boofClocks[0] / 1e9, "%.1f");
+        table.row("training process CPU s", trained.ourClocks[1] / 1e9, trained.boofClocks[1] / 1e9, "%.1f");
+        recall(table, test, ourRun, boofRun, IndexWindows.of(indexConfig));
+        table.scale(ours, theirs);
+        List<RetrievalScale.Point> all = new ArrayList<>(ours);
+        all.addAll(theirs);
+        RetrievalPlot.write(o.plot, all);
+        long[] end = clocks();
+        System.out.printf(Locale.ROOT, "total wall %.1f s, process CPU %.1f s; load average at end: %s; plot: %s%n",
+                (end[0] - wall0) / 1e9, end[1] / 1e9, loadAverage(), o.plot);
+    }
+
+    /** Both vocabularies trained on one set, and the wall and process CPU nanoseconds each training took. */
+    private record Trained(TrainingSet set, Vocabulary vocabulary, BoofRetrieval boof, long[] ourClocks,
+                           long[] boofClocks) {
+    }
+
+    private static Trained train(long seed, IndexConfig indexConfig) {
         List<ScenarioDescriptors.SceneFrame> training = ScenarioDescriptors.describe(
-                Scenario.build(ScenarioConfig.small().withSeed(o.trainSeed)));
+                Scenario.build(ScenarioConfig.small().withSeed(seed)));
         TrainingSet set = ScenarioDescriptors.trainingSet(training);
         System.out.printf(Locale.ROOT, "training: %d descriptors from %d frames (small preset, seed %d)%n",
-                set.count(), set.imageCount(), o.trainSeed);
+                set.count(), set.imageCount(), seed);
         long[] t0 = clocks();
         Vocabulary vocabulary = new VocabularyTrainer(VocabularyConfig.defaults().withBranching(BRANCHING)
                 .withDepth(DEPTH)).train(set, new TrainingOrigin("revisit steered BRIEF 256", List.of("scenario"),
@@ -71,25 +107,13 @@ public final class RetrievalComparison {
         long[] t1 = clocks();
         BoofRetrieval boof = BoofRetrieval.train(set, BRANCHING, DEPTH, indexConfig.exclusionSeconds());
         long[] t2 = clocks();
+        return new Trained(set, vocabulary, boof, new long[]{t1[0] - t0[0], t1[1] - t0[1]},
+                new long[]{t2[0] - t1[0], t2[1] - t1[1]});
+    }
 
-        List<ScenarioDescriptors.SceneFrame> test = ScenarioDescriptors.describe(
-                Scenario.build(ScenarioConfig.small().withSeed(o.testSeed)));
-        RetrievalRecall.Run ourRun = RetrievalRecall.scan(new OurRetrieval(vocabulary, indexConfig, 2), test, 5);
-        RetrievalRecall.Run boofRun = RetrievalRecall.scan(boof, test, 5);
-        boof.clear();
-
-        DescriptorFrames frames = new DescriptorFrames(set.descriptors(), set.count(), PER_FRAME, FLIP_BITS,
-                FRAME_SEED);
-        List<RetrievalScale.Point> ours = RetrievalScale.run(new OurRetrieval(vocabulary, indexConfig, 2), frames,
-                o.sizes, o.queries, o.rounds, KEEP);
-        System.gc();
-        int[] boofSizes = Arrays.stream(o.sizes).filter(s -> s <= o.boofMaxFrames).toArray();
-        List<RetrievalScale.Point> theirs = RetrievalScale.run(boof, frames, boofSizes, o.queries, o.rounds, KEEP);
-
-        RetrievalTable table = new RetrievalTable(System.out);
-        table.row("training wall s", (t1[0] - t0[0]) / 1e9, (t2[0] - t1[0]) / 1e9, "%.1f");
-        table.row("training process CPU s", (t1[1] - t0[1]) / 1e9, (t2[1] - t1[1]) / 1e9, "%.1f");
-        ExclusionWindow window = IndexWindows.of(indexConfig);
+    /** Recall rows under the demo's rule (5 m, 50 degrees) and a looser one (7 m, 80 degrees), then query cost. */
+    private static void recall(RetrievalTable table, List<ScenarioDescriptors.SceneFrame> test,
+                               RetrievalRecall.Run ourRun, RetrievalRecall.Run boofRun, ExclusionWindow window) {
         for (double[] rule : new double[][]{{5, 50}, {7, 80}}) {
             RevisitLabels labels = RetrievalRecall.labels(test, rule[0], rule[1], window);
             table.recall(RetrievalRecall.recall(ourRun, test, labels, rule[0], rule[1]),
@@ -99,13 +123,6 @@ public final class RetrievalComparison {
                 test.size(), test.stream().mapToInt(f -> f.frame().count()).average().orElse(0)),
                 RetrievalScale.percentile(ourRun.queryCpuNanos(), 0.5),
                 RetrievalScale.percentile(boofRun.queryCpuNanos(), 0.5), "%.0f");
-        table.scale(ours, theirs);
-        List<RetrievalScale.Point> all = new ArrayList<>(ours);
-        all.addAll(theirs);
-        RetrievalPlot.write(o.plot, all);
-        long[] end = clocks();
-        System.out.printf(Locale.ROOT, "total wall %.1f s, process CPU %.1f s; load average at end: %s; plot: %s%n",
-                (end[0] - wall0) / 1e9, end[1] / 1e9, loadAverage(), o.plot);
     }
 
     /** Wall nanoseconds and process CPU nanoseconds (all threads). */
