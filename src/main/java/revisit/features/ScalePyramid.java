@@ -254,6 +254,11 @@ final class ScalePyramid {
         return raw[l];
     }
 
+    /** Level {@code l} as int rows, {@code rows(l)[y][x]}; the same pixels as {@link #raw(int)}. */
+    int[][] rows(int l) {
+        return rows[l];
+    }
+
     /** Smoothed level {@code l}, row stride {@link #smoothStride()}, first pixel at index 0. */
     byte[] smooth(int l) {
         return smooth[l];
