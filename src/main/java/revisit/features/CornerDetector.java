@@ -22,6 +22,10 @@ final class CornerDetector {
     /** Int copy of the level for {@link #detect(GrayU8, int, LevelCorners)}. */
     private int[][] ownRows = new int[0][];
     private final double harrisK;
+    /** Columns the Harris window's gradients read: the window plus one on each side. */
+    private static final int HARRIS_SPAN = 2 * HARRIS_RADIUS + 3;
+    private final int[] harrisSmooth = new int[HARRIS_SPAN];
+    private final int[] harrisDiff = new int[HARRIS_SPAN];
     /** FAST score per level pixel (row stride = level width); zero except at the current candidates. */
     private float[] scores = new float[0];
     private int[] candidates = new int[1024];
@@ -124,22 +128,29 @@ final class CornerDetector {
 
     /**
      * Harris measure det(M) - k trace(M)^2 of the 7x7 window of Sobel gradients around (x, y), gradients in grey
-     * levels per pixel and M averaged over the window.
+     * levels per pixel and M averaged over the window. Per window row the vertical Sobel parts are summed once per
+     * column ({@code [1 2 1]} smoothing for gx, the difference for gy) and shared by the three window pixels that
+     * use them; all sums are integers, so the result equals the direct 3x3 evaluation exactly.
      */
     double harrisScore(GrayU8 img, int x, int y) {
         byte[] d = img.data;
         int s = img.stride;
+        int[] smooth = harrisSmooth;
+        int[] diff = harrisDiff;
         long sxx = 0;
         long syy = 0;
         long sxy = 0;
         for (int dy = -HARRIS_RADIUS; dy <= HARRIS_RADIUS; dy++) {
-            int row = img.startIndex + (y + dy) * s + x;
-            for (int dx = -HARRIS_RADIUS; dx <= HARRIS_RADIUS; dx++) {
-                int i = row + dx;
-                int gx = (d[i - s + 1] & 0xFF) + 2 * (d[i + 1] & 0xFF) + (d[i + s + 1] & 0xFF)
-                        - (d[i - s - 1] & 0xFF) - 2 * (d[i - 1] & 0xFF) - (d[i + s - 1] & 0xFF);
-                int gy = (d[i + s - 1] & 0xFF) + 2 * (d[i + s] & 0xFF) + (d[i + s + 1] & 0xFF)
-                        - (d[i - s - 1] & 0xFF) - 2 * (d[i - s] & 0xFF) - (d[i - s + 1] & 0xFF);
+            int row = img.startIndex + (y + dy) * s + x - HARRIS_RADIUS - 1;
+            for (int c = 0; c < HARRIS_SPAN; c++) {
+                int up = d[row + c - s] & 0xFF;
+                int down = d[row + c + s] & 0xFF;
+                smooth[c] = up + 2 * (d[row + c] & 0xFF) + down;
+                diff[c] = down - up;
+            }
+            for (int c = 1; c < HARRIS_SPAN - 1; c++) {
+                int gx = smooth[c + 1] - smooth[c - 1];
+                int gy = diff[c - 1] + 2 * diff[c] + diff[c + 1];
                 sxx += gx * gx;
                 syy += gy * gy;
                 sxy += gx * gy;
