@@ -1,5 +1,7 @@
 package revisit.features;
 
+import java.util.Arrays;
+
 /**
  * The FAST-9 segment test of {@link FastSegmentTest} for rows where many pixels pass its pre-tests: every pixel of
  * the row is tested, in int arithmetic over whole rows that HotSpot's C2 compiles to vector instructions. Per
@@ -41,7 +43,7 @@ final class DenseSegmentTest {
 
     /** Forgets the shifted rows; call before the first row of every level. */
     void startLevel() {
-        java.util.Arrays.fill(rowInSlot, -1);
+        Arrays.fill(rowInSlot, -1);
     }
 
     /**
@@ -83,7 +85,7 @@ final class DenseSegmentTest {
             shifted = new int[RING][2 * RADIUS + 1][width];
             startLevel();
         }
-        java.util.Arrays.fill(corner, xTo, xTo + 8, 0);
+        Arrays.fill(corner, xTo, xTo + 8, 0);
     }
 
     /** Row {@code source} shifted left by {@code dx} over [xFrom, xTo), copied once per source row. */
