@@ -66,7 +66,7 @@ public final class FeatureExtractor {
         pyramid.process(image);
         int levels = pyramid.usableLevels();
         for (int l = 0; l < levels; l++) {
-            detector.detect(pyramid.raw(l), config.borderPx(), corners[l]);
+            detector.detect(pyramid.raw(l), pyramid.rows(l), config.borderPx(), corners[l]);
         }
         int total = assignQuotas(levels);
         if (total == 0) {

@@ -32,9 +32,12 @@ final class ScalePyramid {
     private final int[] heights;
     private final GrayU8[] raw;
     private final byte[][] smooth;
+    /** Level pixels as ints, one array per row ({@code rows[l][y]}): the form C2 vectorises arithmetic on. */
+    private final int[][][] rows;
     private int[][] blurRows = new int[0][];
     private int[][] shifted = new int[0][];
     private int[] accumulator = new int[0];
+    private int[] blend = new int[0];
     private int[] columnIndex = new int[0];
     private int[] columnWeight = new int[0];
 
@@ -53,6 +56,7 @@ final class ScalePyramid {
         this.heights = new int[levels];
         this.raw = new GrayU8[levels];
         this.smooth = new byte[levels][];
+        this.rows = new int[levels][][];
     }
 
     /** Integer Gaussian weights of length 2r+1 summing to exactly 256. */
@@ -82,11 +86,18 @@ final class ScalePyramid {
             return;
         }
         raw[0] = image;
+        for (int y = 0; y < height0; y++) {
+            int[] row = rows[0][y];
+            int start = image.startIndex + y * image.stride;
+            for (int x = 0; x < width0; x++) {
+                row[x] = image.data[start + x] & 0xFF;
+            }
+        }
         for (int l = 1; l < usable; l++) {
-            resample(raw[l - 1], raw[l]);
+            resample(l);
         }
         for (int l = 0; l < usable; l++) {
-            blur(raw[l], smooth[l]);
+            blur(l);
         }
     }
 
@@ -105,9 +116,11 @@ final class ScalePyramid {
             heights[l] = h;
             raw[l] = l == 0 ? null : new GrayU8(w, h);
             smooth[l] = new byte[width * h];
+            rows[l] = new int[h][w];
             usable = l + 1;
         }
         blurRows = new int[RING_MASK + 1][width];
+        blend = new int[width];
         shifted = new int[2 * BLUR_RADIUS + 1][width];
         accumulator = new int[width];
         columnIndex = new int[width];
@@ -115,50 +128,62 @@ final class ScalePyramid {
     }
 
     /**
-     * Bilinear resampling with 7-bit fixed-point weights; dst is smaller than src in both directions. Separable:
-     * each output row first blends its two source rows over the full width, then interpolates along the row.
+     * Bilinear resampling of level {@code l - 1} into level {@code l} with 7-bit fixed-point weights. Separable:
+     * each output row first blends its two source rows over the full width (a vectorised loop over int rows), then
+     * interpolates along the row (a gather, scalar), writing both the byte image and the int row.
      */
-    private void resample(GrayU8 src, GrayU8 dst) {
-        double rx = (double) src.width / dst.width;
-        double ry = (double) src.height / dst.height;
+    private void resample(int l) {
+        int srcW = widths[l - 1];
+        int srcH = heights[l - 1];
+        GrayU8 dst = raw[l];
+        double rx = (double) srcW / dst.width;
+        double ry = (double) srcH / dst.height;
         for (int x = 0; x < dst.width; x++) {
             double sx = (x + 0.5) * rx - 0.5;
-            int x0 = Math.min(Math.max((int) sx, 0), src.width - 2);
+            int x0 = Math.min(Math.max((int) sx, 0), srcW - 2);
             columnIndex[x] = x0;
             columnWeight[x] = Math.min(Math.max((int) Math.round((sx - x0) * 128), 0), 128);
         }
-        byte[] in = src.data;
-        byte[] out = dst.data;
-        int[] blend = accumulator;
+        int[][] in = rows[l - 1];
+        int[] b = blend;
         for (int y = 0; y < dst.height; y++) {
             double sy = (y + 0.5) * ry - 0.5;
-            int y0 = Math.min(Math.max((int) sy, 0), src.height - 2);
+            int y0 = Math.min(Math.max((int) sy, 0), srcH - 2);
             int wy = Math.min(Math.max((int) Math.round((sy - y0) * 128), 0), 128);
-            int top = src.startIndex + y0 * src.stride;
-            int bottom = top + src.stride;
-            for (int x = 0; x < src.width; x++) {
-                int a = in[top + x] & 0xFF;
-                blend[x] = (a << 7) + ((in[bottom + x] & 0xFF) - a) * wy;
+            int[] top = in[y0];
+            int[] bottom = in[y0 + 1];
+            for (int x = 0; x < srcW; x++) {
+                b[x] = (top[x] << 7) + (bottom[x] - top[x]) * wy;
             }
-            int o = dst.startIndex + y * dst.stride;
-            for (int x = 0; x < dst.width; x++) {
-                int j = columnIndex[x];
-                int left = blend[j];
-                out[o + x] = (byte) (((left << 7) + (blend[j + 1] - left) * columnWeight[x] + 8192) >> 14);
-            }
+            interpolateRow(b, dst.data, dst.startIndex + y * dst.stride, rows[l][y]);
+        }
+    }
+
+    /** Horizontal step of {@link #resample}: one output row from the blended source row. */
+    private void interpolateRow(int[] b, byte[] out, int o, int[] row) {
+        int[] index = columnIndex;
+        int[] weight = columnWeight;
+        for (int x = 0; x < row.length; x++) {
+            int j = index[x];
+            int left = b[j];
+            int v = ((left << 7) + (b[j + 1] - left) * weight[x] + 8192) >> 14;
+            row[x] = v;
+            out[o + x] = (byte) v;
         }
     }
 
     /**
      * Separable 7-tap Gaussian with replicated borders into {@code out} (row stride {@link #width0}). Both passes are
-     * written as loops over whole rows with equal indices, the shape HotSpot's C2 vectorises (JDK 17's C2 does not
-     * vectorise a loop that reads one array at several offsets): the horizontal pass reads seven shifted copies of
-     * the row made with {@code System.arraycopy}. This halved the blur time against a per-pixel 7-tap loop (about 1.6
-     * against 3.5 ms over all levels of a 640x480 frame, thread CPU time; docs/FEATURES.md).
+     * loops over whole rows of ints with equal indices into at most six arrays, the shape HotSpot's C2 vectorises:
+     * JDK 17's C2 vectorises neither a loop that reads one array at several offsets nor one that reads seven arrays
+     * (measured), so each 7-tap sum is split into a five-array loop and a three-array loop, and the horizontal pass
+     * reads six shifted copies of the row made with {@code System.arraycopy}.
      */
-    private void blur(GrayU8 src, byte[] out) {
-        int w = src.width;
-        int h = src.height;
+    private void blur(int l) {
+        int w = widths[l];
+        int h = heights[l];
+        int[][] src = rows[l];
+        byte[] out = smooth[l];
         int[][] ring = blurRows;
         int done = -1;
         int k0 = kernel[BLUR_RADIUS];
@@ -168,7 +193,7 @@ final class ScalePyramid {
         int[] acc = accumulator;
         for (int y = 0; y < h; y++) {
             for (; done < Math.min(y + BLUR_RADIUS, h - 1); done++) {
-                blurRow(src.data, src.startIndex + (done + 1) * src.stride, w, ring[(done + 1) & RING_MASK]);
+                blurRow(src[done + 1], w, ring[(done + 1) & RING_MASK]);
             }
             int[] c = ring[y & RING_MASK];
             int[] u1 = ring[Math.max(y - 1, 0) & RING_MASK];
@@ -178,7 +203,10 @@ final class ScalePyramid {
             int[] u3 = ring[Math.max(y - 3, 0) & RING_MASK];
             int[] d3 = ring[Math.min(y + 3, h - 1) & RING_MASK];
             for (int x = 0; x < w; x++) {
-                acc[x] = k0 * c[x] + k1 * (u1[x] + d1[x]) + k2 * (u2[x] + d2[x]) + k3 * (u3[x] + d3[x]) + 32768;
+                acc[x] = k0 * c[x] + k1 * (u1[x] + d1[x]) + k2 * (u2[x] + d2[x]);
+            }
+            for (int x = 0; x < w; x++) {
+                acc[x] += k3 * (u3[x] + d3[x]) + 32768;
             }
             int o = y * width0;
             for (int x = 0; x < w; x++) {
@@ -188,12 +216,8 @@ final class ScalePyramid {
     }
 
     /** Horizontal 7-tap pass of one row, borders replicated; sums scaled by 256. */
-    private void blurRow(byte[] d, int start, int w, int[] row) {
+    private void blurRow(int[] centre, int w, int[] row) {
         int[][] s = shifted;
-        int[] centre = s[BLUR_RADIUS];
-        for (int x = 0; x < w; x++) {
-            centre[x] = d[start + x] & 0xFF;
-        }
         for (int t = 1; t <= BLUR_RADIUS; t++) {
             int[] left = s[BLUR_RADIUS - t];
             int[] right = s[BLUR_RADIUS + t];
@@ -213,7 +237,10 @@ final class ScalePyramid {
         int[] l3 = s[0];
         int[] r3 = s[6];
         for (int x = 0; x < w; x++) {
-            row[x] = k0 * centre[x] + k1 * (l1[x] + r1[x]) + k2 * (l2[x] + r2[x]) + k3 * (l3[x] + r3[x]);
+            row[x] = k0 * centre[x] + k1 * (l1[x] + r1[x]) + k2 * (l2[x] + r2[x]);
+        }
+        for (int x = 0; x < w; x++) {
+            row[x] += k3 * (l3[x] + r3[x]);
         }
     }
 
@@ -225,6 +252,11 @@ final class ScalePyramid {
     /** Raw image of level {@code l}; level 0 is the input itself. */
     GrayU8 raw(int l) {
         return raw[l];
+    }
+
+    /** Level {@code l} as int rows, {@code rows(l)[y][x]}; the same pixels as {@link #raw(int)}. */
+    int[][] rows(int l) {
+        return rows[l];
     }
 
     /** Smoothed level {@code l}, row stride {@link #smoothStride()}, first pixel at index 0. */
