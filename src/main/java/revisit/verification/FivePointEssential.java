@@ -1,8 +1,6 @@
 package revisit.verification;
 
 import java.util.List;
-import org.ddogleg.solver.Polynomial;
-import org.ddogleg.solver.impl.FindRealRootsSturm;
 
 /**
  * Five-point relative orientation: every essential matrix E with {@code xb^T E xa = 0} for five correspondences
@@ -11,7 +9,7 @@ import org.ddogleg.solver.impl.FindRealRootsSturm;
  * {@code E = x X + y Y + z Z + W}; the cubic constraints {@code det E = 0} and {@code 2 E E^T E - tr(E E^T) E = 0}
  * give ten equations in the twenty monomials of degree up to three in x, y, z. Gauss-Jordan elimination of the
  * first ten monomials leaves a 3x3 matrix B(z) acting on (x, y, 1) whose determinant is a degree-10 polynomial in z;
- * its real roots (Sturm sequences, ddogleg) give up to ten solutions.
+ * its real roots ({@link SturmRoots}) give up to ten solutions.
  *
  * <p>Written here rather than calling BoofCV's solver: BoofCV 1.1.7 builds its equations in four generated methods
  * of 16-18 kB of bytecode each, above HotSpot's 8000-byte limit for JIT compilation, so they run interpreted; in
@@ -36,8 +34,8 @@ final class FivePointEssential {
     private final double[][] gram = new double[9][MONOMIALS];
     private final double[][] equations = new double[10][MONOMIALS];
     private final double[][][] b = new double[3][3][5];
-    private final FindRealRootsSturm roots = new FindRealRootsSturm(11, -1, 1e-10, 30, 30);
-    private final Polynomial determinant = new Polynomial(11);
+    private final SturmRoots roots = new SturmRoots();
+    private final double[] determinant = new double[13];
     private final NullSpace9 nullSpace = new NullSpace9();
 
     /**
@@ -55,10 +53,10 @@ final class FivePointEssential {
             return 0;
         }
         buildDeterminant();
-        roots.process(determinant);
-        double[] z = roots.getRoots();
+        int count = roots.solve(determinant, 10);
+        double[] z = roots.roots();
         int found = 0;
-        for (int r = 0; r < roots.getNumberOfRoots(); r++) {
+        for (int r = 0; r < count; r++) {
             found += addSolution(z[r], out) ? 1 : 0;
         }
         return found;
@@ -180,16 +178,7 @@ final class FivePointEssential {
             c[3] = p[16] - q[17];
             c[4] = -q[16];
         }
-        double[] det = new double[13];
-        ZPolynomials.determinant3(b, det);
-        double scale = 0;
-        for (int k = 0; k <= 10; k++) {
-            scale = Math.max(scale, Math.abs(det[k]));
-        }
-        determinant.size = 11;
-        for (int k = 0; k <= 10; k++) {
-            determinant.c[k] = scale > 0 ? det[k] / scale : 0;
-        }
+        ZPolynomials.determinant3(b, determinant);
     }
 
     /** E for one root z: (x, y, 1) spans the null space of B(z). */

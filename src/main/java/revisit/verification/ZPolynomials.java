@@ -15,6 +15,15 @@ final class ZPolynomials {
         return v;
     }
 
+    /** Value at z of the polynomial of the given degree held in the first degree + 1 entries of c. */
+    static double evaluate(double[] c, int degree, double z) {
+        double v = 0;
+        for (int k = degree; k >= 0; k--) {
+            v = v * z + c[k];
+        }
+        return v;
+    }
+
     /** {@code out += sign * a * b}; out must hold a.length + b.length - 1 coefficients. */
     static void multiplyAdd(double[] a, double[] b, double sign, double[] out) {
         for (int i = 0; i < a.length; i++) {
