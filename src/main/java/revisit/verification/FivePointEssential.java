@@ -34,6 +34,9 @@ final class FivePointEssential {
     private final double[][] gram = new double[9][MONOMIALS];
     private final double[][] equations = new double[10][MONOMIALS];
     private final double[][][] b = new double[3][3][5];
+    private final double[] trace = new double[MONOMIALS];
+    private final double[] minor = new double[MONOMIALS];
+    private final double[][] numeric = new double[3][3];
     private final SturmRoots roots = new SturmRoots();
     private final double[] determinant = new double[13];
     private final NullSpace9 nullSpace = new NullSpace9();
@@ -81,7 +84,6 @@ final class FivePointEssential {
                 gram[3 * j + i] = g;
             }
         }
-        double[] trace = new double[MONOMIALS];
         for (int m = 0; m < MONOMIALS; m++) {
             trace[m] = gram[0][m] + gram[4][m] + gram[8][m];
         }
@@ -104,7 +106,7 @@ final class FivePointEssential {
 
     /** Adds {@code sign e_a (e_b e_c - e_d e_e)} to {@code out}. */
     private void cofactorTerm(int a, int b1, int c, int d, int e, double sign, double[] out) {
-        double[] minor = new double[MONOMIALS];
+        java.util.Arrays.fill(minor, 0);
         multiplyAdd(entries[b1], LINEAR, entries[c], 1, minor);
         multiplyAdd(entries[d], LINEAR, entries[e], -1, minor);
         multiplyAdd(minor, QUADRATIC, entries[a], sign, out);
@@ -183,7 +185,7 @@ final class FivePointEssential {
 
     /** E for one root z: (x, y, 1) spans the null space of B(z). */
     private boolean addSolution(double z, List<double[]> out) {
-        double[][] m = new double[3][3];
+        double[][] m = numeric;
         for (int r = 0; r < 3; r++) {
             for (int c = 0; c < 3; c++) {
                 m[r][c] = ZPolynomials.evaluate(b[r][c], z);
