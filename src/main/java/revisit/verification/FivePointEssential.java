@@ -1,5 +1,6 @@
 package revisit.verification;
 
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -68,7 +69,7 @@ final class FivePointEssential {
     /** The nine entries of E as linear polynomials, their products, and the ten cubic constraints. */
     private void buildEquations() {
         for (int k = 0; k < 9; k++) {
-            java.util.Arrays.fill(entries[k], 0);
+            Arrays.fill(entries[k], 0);
             entries[k][12] = basis[0][k];
             entries[k][15] = basis[1][k];
             entries[k][18] = basis[2][k];
@@ -77,7 +78,7 @@ final class FivePointEssential {
         for (int i = 0; i < 3; i++) {
             for (int j = i; j < 3; j++) {
                 double[] g = gram[3 * i + j];
-                java.util.Arrays.fill(g, 0);
+                Arrays.fill(g, 0);
                 for (int k = 0; k < 3; k++) {
                     multiplyAdd(entries[3 * i + k], LINEAR, entries[3 * j + k], 1, g);
                 }
@@ -90,7 +91,7 @@ final class FivePointEssential {
         for (int i = 0; i < 3; i++) {
             for (int j = 0; j < 3; j++) {
                 double[] row = equations[3 * i + j];
-                java.util.Arrays.fill(row, 0);
+                Arrays.fill(row, 0);
                 for (int k = 0; k < 3; k++) {
                     multiplyAdd(gram[3 * i + k], QUADRATIC, entries[3 * k + j], 2, row);
                 }
@@ -98,7 +99,7 @@ final class FivePointEssential {
             }
         }
         double[] det = equations[9];
-        java.util.Arrays.fill(det, 0);
+        Arrays.fill(det, 0);
         cofactorTerm(0, 4, 8, 5, 7, 1, det);
         cofactorTerm(1, 3, 8, 5, 6, -1, det);
         cofactorTerm(2, 3, 7, 4, 6, 1, det);
@@ -106,7 +107,7 @@ final class FivePointEssential {
 
     /** Adds {@code sign e_a (e_b e_c - e_d e_e)} to {@code out}. */
     private void cofactorTerm(int a, int b1, int c, int d, int e, double sign, double[] out) {
-        java.util.Arrays.fill(minor, 0);
+        Arrays.fill(minor, 0);
         multiplyAdd(entries[b1], LINEAR, entries[c], 1, minor);
         multiplyAdd(entries[d], LINEAR, entries[e], -1, minor);
         multiplyAdd(minor, QUADRATIC, entries[a], sign, out);

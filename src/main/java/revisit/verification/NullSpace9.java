@@ -1,5 +1,7 @@
 package revisit.verification;
 
+import java.util.Arrays;
+
 /**
  * Orthonormal basis of the null space of the five epipolar equations {@code xb^T E xa = 0} in the nine entries of
  * E (row-major): Gauss-Jordan elimination with complete pivoting gives one null vector per free column, and
@@ -43,7 +45,7 @@ final class NullSpace9 {
         }
         for (int f = 0; f < 4; f++) {
             double[] v = basis[f];
-            java.util.Arrays.fill(v, 0);
+            Arrays.fill(v, 0);
             v[column[5 + f]] = 1;
             for (int k = 0; k < 5; k++) {
                 v[column[k]] = -rows[k][5 + f];

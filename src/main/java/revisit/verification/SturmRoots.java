@@ -1,5 +1,7 @@
 package revisit.verification;
 
+import java.util.Arrays;
+
 /**
  * Real roots of a polynomial of degree up to ten: Sturm's theorem counts the distinct real roots in an interval
  * from the sign changes of the Sturm sequence {@code p, p', -rem(p, p'), ...} (Sturm 1835; Press et al., Numerical
@@ -168,7 +170,7 @@ final class SturmRoots {
                 top = push(top, a, m, va, vm);
             }
         }
-        java.util.Arrays.sort(roots, 0, count);
+        Arrays.sort(roots, 0, count);
         return count;
     }
 

@@ -1,5 +1,7 @@
 package revisit.verification;
 
+import java.util.Arrays;
+
 /** Small dense polynomials in one variable, coefficients in ascending powers. */
 final class ZPolynomials {
 
@@ -42,12 +44,12 @@ final class ZPolynomials {
      * @param out receives 3L - 2 coefficients (overwritten)
      */
     static void determinant3(double[][][] m, double[] out) {
-        java.util.Arrays.fill(out, 0);
+        Arrays.fill(out, 0);
         int len = m[0][0].length;
         double[] minor = new double[2 * len - 1];
         int[][] cols = {{1, 2}, {0, 2}, {0, 1}};
         for (int c = 0; c < 3; c++) {
-            java.util.Arrays.fill(minor, 0);
+            Arrays.fill(minor, 0);
             multiplyAdd(m[1][cols[c][0]], m[2][cols[c][1]], 1, minor);
             multiplyAdd(m[1][cols[c][1]], m[2][cols[c][0]], -1, minor);
             multiplyAdd(m[0][c], minor, c == 1 ? -1 : 1, out);
