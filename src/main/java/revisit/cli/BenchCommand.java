@@ -29,6 +29,7 @@ import revisit.io.FrameSourceOptions;
 import revisit.io.StampedPose;
 import revisit.io.TrajectoryFile;
 import revisit.pipeline.Closure;
+import revisit.pipeline.ConfigFile;
 import revisit.pipeline.ScanConfig;
 import revisit.pipeline.ScanListener;
 import revisit.pipeline.ScanResult;
@@ -77,6 +78,10 @@ final class BenchCommand implements Callable<Integer> {
             + "--max-distance (default: ${DEFAULT-VALUE}).")
     List<Double> maxAngle;
 
+    @Option(names = "--set", paramLabel = "SECTION.FIELD=VALUE", description = "Override one scan setting for "
+            + "every measurement, e.g. index.consistencyQueries=1 (repeatable; docs/FORMAT-config.md).")
+    List<String> overrides = new ArrayList<>();
+
     @Option(names = "--verbose", description = "Stack traces with errors.")
     boolean verbose;
 
@@ -107,7 +112,7 @@ final class BenchCommand implements Callable<Integer> {
         Vocabulary vocab = VocabularyFile.read(vocabPath);
         Optional<CameraModel> cam = Optional.of(CameraFile.read(folder.resolve("camera.json")));
         List<SequenceInput> sessions = sessions(folder);
-        ScanConfig cfg = ScanConfig.defaults();
+        ScanConfig cfg = ConfigFile.override(ScanConfig.defaults(), overrides);
         PrintWriter o = spec.commandLine().getOut();
         BenchTables.header(o, folder, vocabPath, sessions);
         FrameSourceOptions all = FrameSourceOptions.defaults().withMaxFrames(frames);

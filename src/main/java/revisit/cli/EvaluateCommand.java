@@ -1,6 +1,7 @@
 package revisit.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -20,10 +21,15 @@ import revisit.evaluation.ReportInput;
 import revisit.evaluation.RevisitLabels;
 import revisit.evaluation.ScanOutcomes;
 import revisit.evaluation.ScanReportPairs;
+import revisit.evaluation.ScanSimilarity;
+import revisit.index.WordWeights;
 import revisit.pipeline.ConfigFile;
+import revisit.pipeline.FrameCache;
 import revisit.pipeline.ScanConfig;
 import revisit.pipeline.ScanOutputs;
 import revisit.pipeline.TraceFile;
+import revisit.vocabulary.Vocabulary;
+import revisit.vocabulary.VocabularyFile;
 
 /** {@code revisit evaluate}: precision/recall of a finished scan against labelled revisits. */
 @Command(name = "evaluate", mixinStandardHelpOptions = true,
@@ -47,6 +53,10 @@ final class EvaluateCommand implements Callable<Integer> {
     @Option(names = "--report", paramLabel = "DIR", description = "Write an HTML report with plots here.")
     Path report;
 
+    @Option(names = "--vocabulary", paramLabel = "FILE", description = "The vocabulary the scan used, for the "
+            + "report's similarity map (default: the shipped one).")
+    Path vocabulary;
+
     @Option(names = "--verbose", description = "Stack traces with errors.")
     boolean verbose;
 
@@ -65,6 +75,14 @@ final class EvaluateCommand implements Callable<Integer> {
                     result, truth).withPairs(ScanReportPairs.pairs(scanDir, result, 12));
             if (!labels.allPoses.isEmpty()) {
                 input = input.withPoses(labels.allPoses);
+            }
+            Path checkpoint = scanDir.resolve(ScanOutputs.CHECKPOINT);
+            if (Files.exists(checkpoint)) {
+                Path vocabPath = vocabulary != null ? vocabulary : ProjectHome.defaultVocabulary();
+                Vocabulary vocab = VocabularyFile.read(vocabPath);
+                input = input.withSimilarity(ScanSimilarity.of(FrameCache.readRecords(checkpoint),
+                        traces.sequenceNames(), timeline, new WordWeights(vocab.wordCount(), vocab.weights()),
+                        config.index().scoreNorm(), ScanSimilarity.DEFAULT_MAX_FRAMES, 256));
             }
             Path index = HtmlReport.write(report, input);
             spec.commandLine().getOut().println("report: " + index.toAbsolutePath().normalize());

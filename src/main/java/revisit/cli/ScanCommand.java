@@ -74,6 +74,15 @@ final class ScanCommand implements Callable<Integer> {
             + "consistency check, one per sequence in input order (repeatable; docs/FORMAT-trajectory.md).")
     List<Path> odometry = new ArrayList<>();
 
+    @Option(names = "--depth", paramLabel = "DIR", description = "Folder of 16-bit depth images registered to a "
+            + "sequence's frames (n-th image = frame n), one per sequence in input order (repeatable); with --camera "
+            + "it makes closures metric.")
+    List<Path> depth = new ArrayList<>();
+
+    @Option(names = "--depth-unit", defaultValue = "0.001", paramLabel = "METRES",
+            description = "Metres per depth unit (default ${DEFAULT-VALUE}, millimetres).")
+    double depthUnit;
+
     @Option(names = "--keep-rejected", description = "Also list candidates that failed verification.")
     boolean keepRejected;
 
@@ -112,7 +121,8 @@ final class ScanCommand implements Callable<Integer> {
         FrameSourceOptions so = FrameSourceOptions.defaults().withStride(stride).withMaxFrames(maxFrames);
         List<SequenceInput> sequences = SequenceInput.ofAll(inputs);
         Scanner scanner = new Scanner(cfg, vocab, cam, Scanner.Options.defaults().withKeepRejected(keepRejected)
-                .withCheckpoint(checkpoint).withSourceOptions(so).withOdometry(odometryBySequence(sequences)));
+                .withCheckpoint(checkpoint).withSourceOptions(so).withOdometry(odometryBySequence(sequences))
+                .withDepth(depthBySequence(sequences, cam.isPresent()), depthUnit));
         ScanResult result;
         try (ScanProgress progress = new ScanProgress(!quiet, spec.commandLine().getErr())) {
             result = scanner.run(sequences, progress);
@@ -157,6 +167,24 @@ final class ScanCommand implements Callable<Integer> {
         java.util.Map<String, List<revisit.io.StampedPose>> map = new java.util.HashMap<>();
         for (int i = 0; i < sequences.size(); i++) {
             map.put(sequences.get(i).name(), revisit.io.TrajectoryFile.read(odometry.get(i)));
+        }
+        return map;
+    }
+
+    private java.util.Map<String, Path> depthBySequence(List<SequenceInput> sequences, boolean calibrated) {
+        if (depth.isEmpty()) {
+            return java.util.Map.of();
+        }
+        if (!calibrated) {
+            throw new BadInputException("--depth needs --camera: metric poses need the calibration of the frames");
+        }
+        if (depth.size() != sequences.size()) {
+            throw new BadInputException("--depth: " + depth.size() + " folders for " + sequences.size()
+                    + " inputs; give one per input, in the same order");
+        }
+        java.util.Map<String, Path> map = new java.util.HashMap<>();
+        for (int i = 0; i < sequences.size(); i++) {
+            map.put(sequences.get(i).name(), depth.get(i));
         }
         return map;
     }

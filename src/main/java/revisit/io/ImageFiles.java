@@ -1,6 +1,8 @@
 package revisit.io;
 
+import boofcv.struct.image.GrayU16;
 import boofcv.struct.image.GrayU8;
+import java.awt.image.Raster;
 
 import javax.imageio.ImageIO;
 import javax.imageio.ImageReader;
@@ -55,6 +57,36 @@ public final class ImageFiles {
             return PnmReader.read(file, readAllBounded(file));
         }
         return GrayConversion.toGray(decode(file));
+    }
+
+    /**
+     * Reads a 16-bit single-channel image, as depth sensors and our scenario write depth (PNG or TIFF).
+     *
+     * @param file 16-bit grey image file
+     * @return the raw 16-bit values, unscaled
+     * @throws BadInputException when the file is missing, damaged, too large, or not 16-bit single-channel
+     */
+    public static GrayU16 readGray16(Path file) {
+        checkReadable(file);
+        byte[] head = new byte[2];
+        if (readHead(file, head) == 0) {
+            throw new BadInputException(file + ": empty file (0 bytes); " + REMOVE);
+        }
+        Raster raster = decode(file).getRaster();
+        if (raster.getNumBands() != 1 || raster.getSampleModel().getSampleSize(0) != 16) {
+            throw new BadInputException(file + ": not a 16-bit single-channel image (" + raster.getNumBands()
+                    + " band(s) of " + raster.getSampleModel().getSampleSize(0) + " bits); write depth as 16-bit "
+                    + "grey PNG");
+        }
+        GrayU16 out = new GrayU16(raster.getWidth(), raster.getHeight());
+        int[] row = new int[raster.getWidth()];
+        for (int y = 0; y < out.height; y++) {
+            raster.getSamples(0, y, out.width, 1, 0, row);
+            for (int x = 0; x < out.width; x++) {
+                out.data[y * out.width + x] = (short) row[x];
+            }
+        }
+        return out;
     }
 
     /** Rejects an image of zero or excessive size before any pixel memory is allocated. */

@@ -15,7 +15,7 @@ final class ClosureFactory {
     }
 
     Closure build(FrameRecord query, FrameRecord match, double score, double normalisedScore, Verification v,
-                  String refusal) {
+                  String refusal, String note) {
         boolean accepted = refusal.isEmpty();
         double[] q = {0, 0, 0, 1};
         double[] t = new double[3];
@@ -38,6 +38,9 @@ final class ClosureFactory {
             }
         } else if (accepted) {
             reason = "no camera file: relative pose not estimated";
+        }
+        if (accepted && !note.isEmpty()) {
+            reason = reason.isEmpty() ? note : reason + "; " + note;
         }
         ClosureStatus status = accepted ? ClosureStatus.UNCHECKED : ClosureStatus.REJECTED;
         return new Closure(query.sequence(), query.frame(), query.time(), query.name(), match.sequence(),

@@ -12,6 +12,10 @@ import revisit.index.FrameWords;
 import revisit.index.MatchGroup;
 import revisit.index.QueryResult;
 import revisit.index.RevisitSearch;
+import revisit.io.BadInputException;
+import revisit.verification.Correspondences;
+import revisit.verification.DescriptorMatcher;
+import revisit.verification.MetricPoseConfig;
 import revisit.verification.PairVerifier;
 import revisit.verification.Verification;
 
@@ -34,12 +38,12 @@ final class QueryStep {
     /** Verifies one (query, match) pair; the scan uses the verifier directly, tuning puts a cache in front. */
     @FunctionalInterface
     interface PairCheck {
-        Verification verify(FrameRecord query, FrameRecord match);
+        CheckedPair verify(FrameRecord query, FrameRecord match);
     }
 
-    QueryStep(ScanConfig config, RevisitSearch search, Optional<CameraModel> camera, boolean keepRejected,
-              StageTimes times) {
-        this(config, search, keepRejected, times, direct(config, camera));
+    QueryStep(ScanConfig config, RevisitSearch search, Optional<CameraModel> camera, Optional<DepthFrames> depth,
+              boolean keepRejected, StageTimes times) {
+        this(config, search, keepRejected, times, direct(config, camera, depth));
     }
 
     QueryStep(ScanConfig config, RevisitSearch search, boolean keepRejected, StageTimes times, PairCheck check) {
@@ -51,9 +55,25 @@ final class QueryStep {
         this.factory = new ClosureFactory(config.verification());
     }
 
-    static PairCheck direct(ScanConfig config, Optional<CameraModel> camera) {
+    /**
+     * Node-restricted matching and verification, then a metric pose when depth and a camera are given.
+     *
+     * @throws BadInputException when depth is given without a camera
+     */
+    static PairCheck direct(ScanConfig config, Optional<CameraModel> camera, Optional<DepthFrames> depth) {
         PairVerifier verifier = new PairVerifier(config.verification());
-        return (q, m) -> verifier.verify(q.features(), q.nodes(), m.features(), m.nodes(), camera);
+        DescriptorMatcher matcher = new DescriptorMatcher(config.verification());
+        if (depth.isPresent() && camera.isEmpty()) {
+            throw new BadInputException("depth images were given without a camera file; add --camera, metric "
+                    + "poses need the calibration");
+        }
+        Optional<MetricUpgrade> upgrade = depth.map(d -> new MetricUpgrade(d, camera.orElseThrow(),
+                MetricPoseConfig.defaults()));
+        return (q, m) -> {
+            Correspondences matches = matcher.matchWithinNodes(q.features(), q.nodes(), m.features(), m.nodes());
+            Verification v = verifier.verify(q.features(), m.features(), matches, camera);
+            return upgrade.map(u -> u.upgrade(q, m, matches, v)).orElseGet(() -> CheckedPair.of(v));
+        };
     }
 
     List<Closure> closures() {
@@ -93,11 +113,12 @@ final class QueryStep {
         Verification lastV = null;
         for (Candidate c : tries) {
             FrameRecord m = frames.get(key(c.sequenceId(), c.frameId()));
-            Verification v = check.verify(r, m);
+            CheckedPair checked = check.verify(r, m);
+            Verification v = checked.verification();
             last = c;
             lastV = v;
             String refusal = refusal(v, c);
-            Closure closure = factory.build(r, m, c.rawScore(), c.normalisedScore(), v, refusal);
+            Closure closure = factory.build(r, m, c.rawScore(), c.normalisedScore(), v, refusal, checked.note());
             if (refusal.isEmpty()) {
                 closures.add(closure);
                 return new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.VERIFIED, c.sequenceId(),

@@ -66,9 +66,9 @@ public final class Replay {
         double threshold = config.verification().inlierThresholdPx();
         PairVerifier verifier = verifiers.computeIfAbsent(threshold,
                 t -> new PairVerifier(config.verification().withMinInliers(minInliersFloor).withMinInlierRatio(0)));
-        QueryStep step = new QueryStep(config, search, false, times, (q, m) -> cache.computeIfAbsent(
+        QueryStep step = new QueryStep(config, search, false, times, (q, m) -> CheckedPair.of(cache.computeIfAbsent(
                 q.sequence() + ":" + q.frame() + ">" + m.sequence() + ":" + m.frame() + "@" + threshold,
-                k -> verifier.verify(q.features(), q.nodes(), m.features(), m.nodes(), camera)));
+                k -> verifier.verify(q.features(), q.nodes(), m.features(), m.nodes(), camera))));
         for (FrameRecord r : records) {
             step.handle(r);
         }

@@ -45,33 +45,41 @@ public final class Scanner {
      * @param sourceOptions  stride, frame limit and start time applied to every sequence (its frame rate is
      *                       replaced by {@link ScanSettings#frameRateHz()})
      * @param odometry       odometry trajectory per sequence name for the consistency check; empty for none
+     * @param depthFolders   folder of 16-bit depth images per sequence name (docs/SCAN.md, "Metric closures");
+     *                       empty for none. Needs a camera.
+     * @param depthUnit      metres per stored depth unit, e.g. 0.001 for millimetres
      */
     public record Options(boolean keepRejected, Optional<Path> checkpoint, FrameSourceOptions sourceOptions,
-                          Map<String, List<StampedPose>> odometry) {
+                          Map<String, List<StampedPose>> odometry, Map<String, Path> depthFolders, double depthUnit) {
 
         public Options {
             odometry = Map.copyOf(odometry);
+            depthFolders = Map.copyOf(depthFolders);
         }
 
-        /** No rejected candidates, no checkpoint, every frame, no odometry. */
+        /** No rejected candidates, no checkpoint, every frame, no odometry, no depth. */
         public static Options defaults() {
-            return new Options(false, Optional.empty(), FrameSourceOptions.defaults(), Map.of());
+            return new Options(false, Optional.empty(), FrameSourceOptions.defaults(), Map.of(), Map.of(), 0.001);
         }
 
         public Options withKeepRejected(boolean v) {
-            return new Options(v, checkpoint, sourceOptions, odometry);
+            return new Options(v, checkpoint, sourceOptions, odometry, depthFolders, depthUnit);
         }
 
         public Options withCheckpoint(Path v) {
-            return new Options(keepRejected, Optional.of(v), sourceOptions, odometry);
+            return new Options(keepRejected, Optional.of(v), sourceOptions, odometry, depthFolders, depthUnit);
         }
 
         public Options withSourceOptions(FrameSourceOptions v) {
-            return new Options(keepRejected, checkpoint, v, odometry);
+            return new Options(keepRejected, checkpoint, v, odometry, depthFolders, depthUnit);
         }
 
         public Options withOdometry(Map<String, List<StampedPose>> v) {
-            return new Options(keepRejected, checkpoint, sourceOptions, v);
+            return new Options(keepRejected, checkpoint, sourceOptions, v, depthFolders, depthUnit);
+        }
+
+        public Options withDepth(Map<String, Path> folders, double unitMetres) {
+            return new Options(keepRejected, checkpoint, sourceOptions, odometry, folders, unitMetres);
         }
     }
 
@@ -102,7 +110,8 @@ public final class Scanner {
         StageTimes times = new StageTimes();
         RevisitDatabase db = new RevisitDatabase(new WordWeights(vocabulary.wordCount(), vocabulary.weights()),
                 config.index());
-        QueryStep step = new QueryStep(config, new RevisitSearch(db), camera, options.keepRejected(), times);
+        QueryStep step = new QueryStep(config, new RevisitSearch(db), camera, depthFrames(inputs),
+                options.keepRejected(), times);
         List<String> skipped = new ArrayList<>();
         Optional<FrameCache> cache = options.checkpoint().map(p -> FrameCache.open(p, fingerprint(inputs)));
         ExecutorService pool = Executors.newFixedThreadPool(config.scan().effectiveThreads());
@@ -217,6 +226,21 @@ public final class Scanner {
             }
             throw new IllegalStateException("feature extraction failed: " + e.getCause(), e.getCause());
         }
+    }
+
+    /** The depth folders by sequence id, or empty when no depth was given. */
+    private Optional<DepthFrames> depthFrames(List<SequenceInput> inputs) {
+        if (options.depthFolders().isEmpty()) {
+            return Optional.empty();
+        }
+        Map<Integer, Path> byId = new java.util.HashMap<>();
+        for (int i = 0; i < inputs.size(); i++) {
+            Path folder = options.depthFolders().get(inputs.get(i).name());
+            if (folder != null) {
+                byId.put(i, folder);
+            }
+        }
+        return Optional.of(new DepthFrames(byId, options.depthUnit()));
     }
 
     /** Hash of everything that shapes a checkpoint record: inputs, feature settings, vocabulary, matching level. */
