@@ -47,6 +47,9 @@ public class VerificationBenchmark {
     /** Vocabulary level whose nodes restrict matching: the scan default (ScanSettings.matchingNodeLevel). */
     static final int NODE_LEVEL = 2;
 
+    /** Putative matches of {@link #verifyMatchesWithoutGeometry}. */
+    static final int UNRELATED_MATCHES = 200;
+
     private FrameFeatures a;
     private FrameFeatures b;
     private int[] nodesA;
@@ -54,6 +57,7 @@ public class VerificationBenchmark {
     private Correspondences matches;
     private FrameFeatures far1;
     private FrameFeatures far2;
+    private Correspondences unrelated;
     private CameraModel camera;
     private PairVerifier verifier;
     private DescriptorMatcher matcher;
@@ -76,6 +80,19 @@ public class VerificationBenchmark {
         verifier = new PairVerifier(config);
         matcher = new DescriptorMatcher(config);
         matches = matcher.matchAll(a, b);
+        unrelated = indexPairs(UNRELATED_MATCHES);
+    }
+
+    /**
+     * The first n features of templeSR0002 paired with the first n of templeSR0003 by index: putative matches with
+     * no common geometry, so RANSAC finds no model near the acceptance bar and draws its full sample cap.
+     */
+    private static Correspondences indexPairs(int n) {
+        int[] idx = new int[n];
+        for (int i = 0; i < n; i++) {
+            idx[i] = i;
+        }
+        return new Correspondences(n, idx, idx.clone(), new int[n]);
     }
 
     /** Brute-force matching plus verification: the cost of one candidate. */
@@ -100,6 +117,12 @@ public class VerificationBenchmark {
     @Benchmark
     public Verification matchAndRejectFarPair() {
         return verifier.verify(far1, far2, Optional.of(camera));
+    }
+
+    /** The worst case for RANSAC: 200 matches with no geometry (30% bar: the cap of 1000 samples binds). */
+    @Benchmark
+    public Verification verifyMatchesWithoutGeometry() {
+        return verifier.verify(far1, far2, unrelated, Optional.of(camera));
     }
 
     @Benchmark

@@ -29,6 +29,7 @@ public final class VerificationCpuTime {
             report("matchAndVerify", mx, 200, b::matchAndVerify);
             report("matchWithinNodesAndVerify", mx, 200, b::matchWithinNodesAndVerify);
             report("matchAndRejectFarPair", mx, 20, b::matchAndRejectFarPair);
+            report("verifyMatchesWithoutGeometry", mx, 20, b::verifyMatchesWithoutGeometry);
         }
         Correspondences all = b.matchBruteForce();
         Correspondences nodes = b.matchWithinNodes();
@@ -41,6 +42,9 @@ public final class VerificationCpuTime {
         Verification far = b.matchAndRejectFarPair();
         System.out.printf("far pair: %d matches, %s %s, %d inliers, %d samples%n", far.matchCount(), far.outcome(),
                 far.model(), far.inlierCount(), far.iterations());
+        Verification none = b.verifyMatchesWithoutGeometry();
+        System.out.printf("no geometry: %d matches, %s %s, %d inliers, %d samples%n", none.matchCount(),
+                none.outcome(), none.model(), none.inlierCount(), none.iterations());
         Optional.of(mx).ifPresent(m -> System.out.println("load " + ManagementFactory.getOperatingSystemMXBean()
                 .getSystemLoadAverage()));
     }

@@ -92,7 +92,7 @@ final class TuneCommand implements Callable<Integer> {
                 ParameterRange.linear("index.minNormalisedScore", 0.1, 0.6, 6),
                 ParameterRange.integers("index.consistencyQueries", 0, 4),
                 ParameterRange.integers("verification.minInliers", 10, 40),
-                ParameterRange.linear("scan.minInlierRatio", 0.15, 0.5, 8)));
+                ParameterRange.linear("verification.minInlierRatio", 0.15, 0.5, 8)));
     }
 
     @Override

@@ -28,6 +28,9 @@ public final class ConfigFile {
     /** Current version. */
     public static final int VERSION = 1;
 
+    /** Field name of the inlier-ratio bar, formerly also in the scan section. */
+    private static final String RATIO = "minInlierRatio";
+
     private static final ObjectMapper JSON = new ObjectMapper()
             .setVisibility(PropertyAccessor.ALL, JsonAutoDetect.Visibility.NONE)
             .setVisibility(PropertyAccessor.FIELD, JsonAutoDetect.Visibility.ANY)
@@ -73,6 +76,7 @@ public final class ConfigFile {
         body.remove("format");
         body.remove("version");
         body.remove("comment");
+        moveFormerInlierRatio(body);
         merge(file, merged, body, "");
         try {
             return JSON.treeToValue(merged, ScanConfig.class);
@@ -100,7 +104,8 @@ public final class ConfigFile {
                 throw new BadInputException("--set " + a + ": expected section.field=value, e.g."
                         + " index.exclusionSeconds=10");
             }
-            String section = a.substring(0, dot);
+            String section = RATIO.equals(a.substring(dot + 1, eq)) && "scan".equals(a.substring(0, dot))
+                    ? "verification" : a.substring(0, dot);
             String field = a.substring(dot + 1, eq);
             String text = a.substring(eq + 1);
             JsonNode sec = merged.get(section);
@@ -118,6 +123,27 @@ public final class ConfigFile {
                     ? e.getCause().getMessage() : e.getOriginalMessage();
             throw new BadInputException("--set: " + why, e);
         }
+    }
+
+    /**
+     * Files written before the inlier-ratio bar was unified hold it twice, {@code scan.minInlierRatio} beside
+     * {@code verification.minInlierRatio}, and both applied; the bar is now the verification field alone, set to
+     * the larger of the two (the one that decided), so an old file keeps its meaning.
+     */
+    private static void moveFormerInlierRatio(ObjectNode body) {
+        JsonNode scan = body.get("scan");
+        if (scan == null || !scan.isObject() || !scan.has(RATIO)) {
+            return;
+        }
+        JsonNode former = ((ObjectNode) scan).remove(RATIO);
+        JsonNode verification = body.has("verification") ? body.get("verification") : body.putObject("verification");
+        if (!verification.isObject()) {
+            return;
+        }
+        JsonNode current = verification.get(RATIO);
+        boolean currentDecides = current != null && current.isNumber() && former.isNumber()
+                && current.asDouble() > former.asDouble();
+        ((ObjectNode) verification).set(RATIO, currentDecides ? current : former);
     }
 
     private static JsonNode parseScalar(String assignment, String text) {

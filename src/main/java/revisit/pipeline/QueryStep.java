@@ -134,8 +134,8 @@ final class QueryStep {
 
     /**
      * Why a verification does not make a closure, or "" when it does: the verifier's own verdict, then the
-     * inlier minimum (applied here too so a verifier run with a lower minimum can be reused), the inlier ratio
-     * and the score threshold of the scan settings.
+     * inlier minimum and inlier ratio of the verification settings (applied here too so a verifier run with a
+     * lower bar can be reused, see {@link Replay}) and the score threshold of the scan settings.
      */
     private String refusal(Verification v, Candidate c) {
         if (!v.accepted()) {
@@ -144,7 +144,7 @@ final class QueryStep {
         if (v.inlierCount() < config.verification().minInliers()) {
             return "too_few_inliers";
         }
-        if (v.inlierRatio() < config.scan().minInlierRatio()) {
+        if (v.inlierRatio() < config.verification().minInlierRatio()) {
             return "low_inlier_ratio";
         }
         if (c.normalisedScore() < config.scan().minScore()) {

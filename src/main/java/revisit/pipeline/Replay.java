@@ -15,8 +15,8 @@ import revisit.vocabulary.Vocabulary;
 /**
  * Re-runs the ordered part of a scan (database, consistency, verification, acceptance) over frames whose features
  * and words were already computed, for many settings in a row. Geometric verifications are cached per frame pair
- * and inlier threshold, computed once with a low inlier minimum; the scan's own minimum, ratio and score rules
- * are then applied to the cached result, so a sweep over those costs no new RANSAC runs.
+ * and inlier threshold, computed once with a low inlier minimum and no inlier-ratio bar; each setting's minimum,
+ * ratio and score rules are then applied to the cached result, so a sweep over those costs no new RANSAC runs.
  */
 public final class Replay {
 
@@ -65,7 +65,7 @@ public final class Replay {
         RevisitSearch search = new RevisitSearch(new RevisitDatabase(weights, config.index()));
         double threshold = config.verification().inlierThresholdPx();
         PairVerifier verifier = verifiers.computeIfAbsent(threshold,
-                t -> new PairVerifier(config.verification().withMinInliers(minInliersFloor)));
+                t -> new PairVerifier(config.verification().withMinInliers(minInliersFloor).withMinInlierRatio(0)));
         QueryStep step = new QueryStep(config, search, false, times, (q, m) -> CheckedPair.of(cache.computeIfAbsent(
                 q.sequence() + ":" + q.frame() + ">" + m.sequence() + ":" + m.frame() + "@" + threshold,
                 k -> verifier.verify(q.features(), q.nodes(), m.features(), m.nodes(), camera))));

@@ -3,7 +3,9 @@ package revisit.pipeline;
 import revisit.io.BadFramePolicy;
 
 /**
- * Settings of the scan itself (the stages have their own records).
+ * Settings of the scan itself (the stages have their own records). The inlier-ratio bar of a closure is
+ * {@code verification.minInlierRatio} ({@link revisit.verification.VerificationConfig}); configuration files
+ * that still carry the former {@code scan.minInlierRatio} are read through {@link ConfigFile}.
  *
  * @param threads              worker threads for feature extraction, 0 = one per core; results do not depend on it
  * @param matchingNodeLevel    vocabulary level (from the root, root = 0) whose nodes restrict descriptor matching
@@ -16,16 +18,11 @@ import revisit.io.BadFramePolicy;
  *                             crash loses at most ten frames of work
  * @param verifyTopCandidates  how many of the chosen group's best frames are verified until one passes, 1-10;
  *                             default 2 (a second try rescues a revisit whose best frame is blurred)
- * @param minInlierRatio       a verified pair becomes a closure only when inliers / putative matches reach this,
- *                             0-1; default 0.3, measured here: on the Middlebury dino ring (Seitz et al., CVPR
- *                             2006) wrong pairs that passed 12 inliers had ratios 0.15-0.24 and true ones 0.31-0.91
- *                             (docs/SCAN.md); random matches rarely agree on one geometry at that rate
  * @param minScore             a verified pair becomes a closure only when its normalised retrieval score reaches
  *                             this, 0 (off) to ~10; default 0 (off); {@code tune} sets it from labelled data
  */
 public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy badFrames, double frameRateHz,
-                           int checkpointEveryFrames, int verifyTopCandidates, double minInlierRatio,
-                           double minScore) {
+                           int checkpointEveryFrames, int verifyTopCandidates, double minScore) {
 
     public ScanSettings {
         if (threads < 0 || threads > 256) {
@@ -47,9 +44,6 @@ public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy ba
         if (verifyTopCandidates < 1 || verifyTopCandidates > 10) {
             throw new IllegalArgumentException("verifyTopCandidates must be in [1, 10], was " + verifyTopCandidates);
         }
-        if (!(minInlierRatio >= 0 && minInlierRatio <= 1)) {
-            throw new IllegalArgumentException("minInlierRatio must be in [0, 1], was " + minInlierRatio);
-        }
         if (!(minScore >= 0 && minScore <= 1e9)) {
             throw new IllegalArgumentException("minScore must be in [0, 1e9], was " + minScore);
         }
@@ -57,7 +51,7 @@ public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy ba
 
     /** The defaults documented on each field. */
     public static ScanSettings defaults() {
-        return new ScanSettings(0, 2, BadFramePolicy.SKIP, 10.0, 10, 2, 0.3, 0);
+        return new ScanSettings(0, 2, BadFramePolicy.SKIP, 10.0, 10, 2, 0);
     }
 
     /** Worker threads actually used. */
@@ -67,41 +61,36 @@ public record ScanSettings(int threads, int matchingNodeLevel, BadFramePolicy ba
 
     public ScanSettings withThreads(int v) {
         return new ScanSettings(v, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames,
-                verifyTopCandidates, minInlierRatio, minScore);
+                verifyTopCandidates, minScore);
     }
 
     public ScanSettings withMatchingNodeLevel(int v) {
         return new ScanSettings(threads, v, badFrames, frameRateHz, checkpointEveryFrames, verifyTopCandidates,
-                minInlierRatio, minScore);
+                minScore);
     }
 
     public ScanSettings withBadFrames(BadFramePolicy v) {
         return new ScanSettings(threads, matchingNodeLevel, v, frameRateHz, checkpointEveryFrames,
-                verifyTopCandidates, minInlierRatio, minScore);
+                verifyTopCandidates, minScore);
     }
 
     public ScanSettings withFrameRateHz(double v) {
         return new ScanSettings(threads, matchingNodeLevel, badFrames, v, checkpointEveryFrames,
-                verifyTopCandidates, minInlierRatio, minScore);
+                verifyTopCandidates, minScore);
     }
 
     public ScanSettings withCheckpointEveryFrames(int v) {
         return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, v, verifyTopCandidates,
-                minInlierRatio, minScore);
-    }
-
-    public ScanSettings withMinInlierRatio(double v) {
-        return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames,
-                verifyTopCandidates, v, minScore);
+                minScore);
     }
 
     public ScanSettings withMinScore(double v) {
         return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames,
-                verifyTopCandidates, minInlierRatio, v);
+                verifyTopCandidates, v);
     }
 
     public ScanSettings withVerifyTopCandidates(int v) {
         return new ScanSettings(threads, matchingNodeLevel, badFrames, frameRateHz, checkpointEveryFrames, v,
-                minInlierRatio, minScore);
+                minScore);
     }
 }

@@ -11,6 +11,13 @@ import java.util.SplittableRandom;
  * inlier ratio w so far (Hartley &amp; Zisserman 2004, sec. 4.7.1, algorithm 4.5), and a final linear refit on
  * all inliers repeated while it lowers the cost. Each call starts a fresh generator from the given seed, so the
  * same input and seed give the same result.
+ *
+ * <p>Early stop for hopeless inputs: a caller that will only accept a model with at least {@code minSupport}
+ * inliers among the {@code m} pooled points needs an inlier share of at least {@code w_min = minSupport / m}. If
+ * such a model exists, Fischler &amp; Bolles' bound says {@code N_min = log(1 - p) / log(1 - w_min^s)} samples
+ * contain an all-inlier sample with probability p, so the run draws at most {@code N_min}. This never cuts a run
+ * that has found a model meeting the bar: its adaptive count, from a share w &gt;= w_min, is already at most
+ * N_min.
  */
 final class AdaptiveRansac {
 
@@ -53,18 +60,22 @@ final class AdaptiveRansac {
     }
 
     /**
-     * Runs RANSAC over all {@code n} points.
+     * Runs RANSAC over all {@code n} points, drawing no more samples than would find a model with
+     * {@code minSupport} inliers with the configured confidence (see the class comment).
      *
      * @param thresholdSq inlier cut on the squared error, pixels squared
+     * @param minSupport  fewest inliers of a model the caller can accept, 0 for no early stop
      * @return the best model, or empty when no sample produced one
      */
     static Optional<Fit> run(int n, Sampler sampler, Residual residual, Refitter refitter, double thresholdSq,
-                             VerificationConfig config) {
+                             int minSupport, VerificationConfig config) {
         int[] all = new int[n];
         for (int i = 0; i < n; i++) {
             all[i] = i;
         }
-        return run(n, all, config.maxIterations(), sampler, residual, refitter, thresholdSq, config);
+        int cap = (int) Math.min(config.maxIterations(),
+                requiredSamples((double) minSupport / n, sampler.sampleSize(), config.confidence()));
+        return run(n, all, cap, sampler, residual, refitter, thresholdSq, config);
     }
 
     /**

@@ -3,7 +3,6 @@ package revisit.verification;
 import boofcv.abst.geo.EstimateNofEpipolar;
 import boofcv.alg.geo.f.FundamentalLinear8;
 import boofcv.alg.geo.h.HomographyDirectLinearTransform;
-import boofcv.factory.geo.EnumEssential;
 import boofcv.factory.geo.EnumFundamental;
 import boofcv.factory.geo.FactoryMultiView;
 import boofcv.struct.geo.AssociatedPair;
@@ -14,14 +13,20 @@ import org.ejml.data.DMatrixRMaj;
 import org.ddogleg.struct.DogArray;
 
 /**
- * Minimal and least-squares solvers of BoofCV 1.1.7 wrapped as RANSAC samplers and refitters. All models are
- * returned in undistorted pixel coordinates so one residual serves each kind: the essential matrix from
- * Nister's five-point solver (IEEE PAMI 2004) is turned into {@code F = K^-T E K^-1}. Holds solver state: one
- * instance per thread.
+ * Minimal and least-squares solvers (BoofCV 1.1.7's, and our five-point {@link FivePointEssential}) wrapped as
+ * RANSAC samplers and refitters. All models are returned in undistorted pixel coordinates so one residual serves
+ * each kind: the essential matrix from Nister's five-point method (IEEE PAMI 2004) is turned into
+ * {@code F = K^-T E K^-1}. Holds solver state: one instance per thread.
  */
 final class ModelFitters {
 
-    private final EstimateNofEpipolar essentialFive = FactoryMultiView.essential_N(EnumEssential.NISTER_5);
+    /** Our own solver: BoofCV's NISTER_5 runs interpreted (see FivePointEssential), ~100 us per sample. */
+    private final FivePointEssential essentialFive = new FivePointEssential();
+    private final List<double[]> essentials = new ArrayList<>();
+    private final double[] sampleXa = new double[5];
+    private final double[] sampleYa = new double[5];
+    private final double[] sampleXb = new double[5];
+    private final double[] sampleYb = new double[5];
     private final EstimateNofEpipolar fundamentalSeven = FactoryMultiView.fundamental_N(EnumFundamental.LINEAR_7);
     private final EstimateNofEpipolar fundamentalEight = FactoryMultiView.fundamental_N(EnumFundamental.LINEAR_8);
     private final FundamentalLinear8 essentialLinear = new FundamentalLinear8(false);
@@ -34,10 +39,17 @@ final class ModelFitters {
     /** Five-point essential samples in normalised coordinates, returned as pixel fundamental matrices. */
     AdaptiveRansac.Sampler essential(PointPairs p) {
         return sampler(5, (idx, size, out) -> {
-            if (essentialFive.process(gather(p.normalized, idx, size), solutions)) {
-                for (int i = 0; i < solutions.size; i++) {
-                    out.add(p.fundamentalFromEssential(solutions.get(i).data.clone()));
-                }
+            for (int i = 0; i < 5; i++) {
+                AssociatedPair q = p.normalized.get(idx[i]);
+                sampleXa[i] = q.p1.x;
+                sampleYa[i] = q.p1.y;
+                sampleXb[i] = q.p2.x;
+                sampleYb[i] = q.p2.y;
+            }
+            essentials.clear();
+            essentialFive.solve(sampleXa, sampleYa, sampleXb, sampleYb, essentials);
+            for (double[] e : essentials) {
+                out.add(p.fundamentalFromEssential(e));
             }
         });
     }

@@ -50,7 +50,12 @@ public final class PairVerifier {
             return Verification.rejected(Outcome.TOO_FEW_MATCHES, n, ModelScores.none(), 0);
         }
         PointPairs p = PointPairs.of(a, b, matches, camera);
-        Candidates c = fitCandidates(p);
+        int bar = config.minSupport(n);
+        Optional<AdaptiveRansac.Fit> epipolar = fitEpipolar(p, bar);
+        if (epipolar.isPresent() && epipolar.get().inlierCount() < bar) {
+            return Verification.rejected(Outcome.NO_CONSENSUS, n, ModelScores.none(), epipolar.get().iterations());
+        }
+        Candidates c = fitCandidates(p, epipolar, bar);
         ModelScores scores = c.scores();
         int iterations = c.iterations();
         Verification result = switch (choose(scores, p.calibrated())) {
@@ -83,15 +88,23 @@ public final class PairVerifier {
                               Optional<RotationFit> rotation, ModelScores scores, int iterations) {
     }
 
-    private Candidates fitCandidates(PointPairs p) {
-        int n = p.count;
+    /**
+     * Essential (calibrated) or fundamental RANSAC over all matches, drawing no more samples than find a model
+     * with {@code bar} inliers with the configured confidence (see {@link AdaptiveRansac}).
+     */
+    private Optional<AdaptiveRansac.Fit> fitEpipolar(PointPairs p, int bar) {
         double tF = config.inlierThresholdPx() * config.inlierThresholdPx();
+        return p.calibrated()
+                ? AdaptiveRansac.run(p.count, fitters.essential(p), p::epipolarSq, fitters.essentialRefit(p), tF,
+                bar, config)
+                : AdaptiveRansac.run(p.count, fitters.fundamental(p, config.fundamentalSolver()), p::epipolarSq,
+                fitters.fundamentalRefit(p), tF, bar, config);
+    }
+
+    private Candidates fitCandidates(PointPairs p, Optional<AdaptiveRansac.Fit> epipolar, int bar) {
+        int n = p.count;
         double tH = config.homographyThresholdPx() * config.homographyThresholdPx();
-        Optional<AdaptiveRansac.Fit> epipolar = p.calibrated()
-                ? AdaptiveRansac.run(n, fitters.essential(p), p::epipolarSq, fitters.essentialRefit(p), tF, config)
-                : AdaptiveRansac.run(n, fitters.fundamental(p, config.fundamentalSolver()), p::epipolarSq,
-                fitters.fundamentalRefit(p), tF, config);
-        Optional<AdaptiveRansac.Fit> homography = fitHomography(p, epipolar, p::homographySq, tH);
+        Optional<AdaptiveRansac.Fit> homography = fitHomography(p, epipolar, p::homographySq, tH, bar);
         double sigma = config.noiseSigmaPx();
         ModelSelection.Candidate epipolarKind = p.calibrated() ? ModelSelection.Candidate.ESSENTIAL
                 : ModelSelection.Candidate.FUNDAMENTAL;
@@ -116,10 +129,11 @@ public final class PairVerifier {
      * such a homography with the configured confidence; without an epipolar fit it searches all matches.
      */
     private Optional<AdaptiveRansac.Fit> fitHomography(PointPairs p, Optional<AdaptiveRansac.Fit> epipolar,
-                                                       AdaptiveRansac.Residual error, double thresholdSq) {
+                                                       AdaptiveRansac.Residual error, double thresholdSq,
+                                                       int bar) {
         if (epipolar.isEmpty()) {
             return AdaptiveRansac.run(p.count, fitters.homography(p), error, fitters.homographyRefit(p),
-                    thresholdSq, config);
+                    thresholdSq, bar, config);
         }
         int[] pool = PoseRecovery.indices(epipolar.get().inliers());
         long needed = AdaptiveRansac.requiredSamples(MIN_HOMOGRAPHY_SHARE, 4, config.confidence());

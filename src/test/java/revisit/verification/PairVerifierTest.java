@@ -202,6 +202,55 @@ class PairVerifierTest {
         assertFalse(v.accepted(), "inliers " + v.inlierCount() + " model " + v.model());
     }
 
+    /** Fischler &amp; Bolles (CACM 1981) sample bound for an all-inlier sample of size s at inlier share w. */
+    private static long samplesBound(double w, int s, double p) {
+        return (long) Math.ceil(Math.log(1 - p) / Math.log(1 - Math.pow(w, s)));
+    }
+
+    @Test
+    void pairWithoutGeometryStopsAtTheSampleBoundWithNoConsensus() {
+        VerificationConfig config = VerificationConfig.defaults();
+        for (int count : new int[]{30, 40, 50}) {
+            SyntheticPair s = SyntheticPair.of(30 + count, count, new double[]{0.05, 0.1, 0}, new double[]{1, 0, 0},
+                    1.0, 1.0, SyntheticPair.Scene.GENERAL, SyntheticPair.CAMERA);
+            Verification v = verifier.verify(s.a, s.b, s.matches, CAMERA);
+            double share = (double) Math.max(config.minInliers(), Math.ceil(config.minInlierRatio() * count)) / count;
+            long bound = samplesBound(share, 5, config.confidence());
+            assertEquals(Outcome.NO_CONSENSUS, v.outcome(), count + " random matches");
+            assertTrue(v.iterations() <= bound, count + " matches: " + v.iterations() + " samples, bound " + bound);
+            assertTrue(bound < config.maxIterations(), "the bound, not the cap, stopped " + count + " matches");
+        }
+    }
+
+    @Test
+    void largeRandomMatchSetIsRejectedWithinTheIterationCap() {
+        SyntheticPair s = general(11, 1.0);
+        Verification v = verifier.verify(s.a, s.b, s.matches, CAMERA);
+        assertEquals(Outcome.NO_CONSENSUS, v.outcome());
+        assertTrue(v.iterations() <= VerificationConfig.defaults().maxIterations(), v.iterations() + " samples");
+    }
+
+    @Test
+    void easyPairWithFewMatchesIsStillAccepted() {
+        for (long seed = 1; seed <= 5; seed++) {
+            SyntheticPair s = SyntheticPair.of(seed, 40, new double[]{0.05, 0.1, 0}, new double[]{1, 0, 0.2}, 1.0,
+                    0.25, SyntheticPair.Scene.GENERAL, SyntheticPair.CAMERA);
+            Verification v = verifier.verify(s.a, s.b, s.matches, CAMERA);
+            assertEquals(Outcome.ACCEPTED, v.outcome(), "seed " + seed);
+            assertEquals(ModelKind.ESSENTIAL, v.model(), "seed " + seed);
+            int trueFound = 0;
+            int trueCount = 0;
+            for (int k = 0; k < 40; k++) {
+                trueCount += s.outlier[k] ? 0 : 1;
+            }
+            for (int k : v.inlierMatches()) {
+                trueFound += s.outlier[k] ? 0 : 1;
+            }
+            // as in recoversKnownPoseWithHalfOutliers: the 1.96-sigma cut keeps ~95% of true matches (H&Z Table 4.2)
+            assertTrue(trueFound >= 0.8 * trueCount, "seed " + seed + ": " + trueFound + " of " + trueCount);
+        }
+    }
+
     @Test
     void sameSeedGivesTheSameResultWhenTheVerifierIsReused() {
         SyntheticPair s = general(8, 0.5);

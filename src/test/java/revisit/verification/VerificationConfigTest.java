@@ -27,6 +27,16 @@ class VerificationConfigTest {
     }
 
     @Test
+    void minSupportIsTheStricterOfCountAndShare() {
+        VerificationConfig c = VerificationConfig.defaults().withMinInliers(20).withMinInlierRatio(0.3);
+        assertEquals(30, c.minSupport(100), "30% of 100 beats 20");
+        assertEquals(20, c.minSupport(40), "20 beats 30% of 40 = 12");
+        assertEquals(31, c.minSupport(101), "31 / 101 is the first share >= 0.3");
+        assertEquals(30, c.withMinInliers(8).minSupport(100));
+        assertEquals(8, c.withMinInliers(8).withMinInlierRatio(0).minSupport(100));
+    }
+
+    @Test
     void rejectsOutOfRangeValues() {
         VerificationConfig d = VerificationConfig.defaults();
         assertThrows(IllegalArgumentException.class, () -> d.withRatio(1.5));
