@@ -20,7 +20,7 @@ import revisit.features.FrameFeatures;
  */
 final class GroupedDescent {
 
-    /** Descriptors descended together: 16 and 32 measured alike, 8 slower (scratch runs, docs/VOCABULARY.md). */
+    /** Descriptors descended together: 8, 16 and 32 measured alike (scratch runs, docs/VOCABULARY.md). */
     static final int LANES = 16;
 
     private GroupedDescent() {
@@ -36,14 +36,14 @@ final class GroupedDescent {
     static void lookup(FlatTree tree, long[] d, int n, int nodeLevel, int[] wordsOut, int[] nodesOut) {
         int[] offset = new int[LANES];
         long[] header = new long[LANES];
-        int[] ancestor = new int[LANES];
+        long[] ancestor = new long[LANES];
         long rootHeader = tree.header(0);
         for (int group = 0; group < n; group += LANES) {
             int lanes = Math.min(LANES, n - group);
             for (int l = 0; l < lanes; l++) {
                 offset[l] = 0;
                 header[l] = rootHeader;
-                ancestor[l] = 0;
+                ancestor[l] = -1;
             }
             int active = lanes;
             for (int level = 1; active > 0; level++) {
@@ -55,12 +55,12 @@ final class GroupedDescent {
     }
 
     /**
-     * One level for every lane still descending: picks the nearest child, records the ancestor when
-     * {@code atOrAboveNodeLevel}, moves to the child's block or, at a leaf, writes the results and retires the lane
+     * One level for every lane still descending: picks the nearest child, records it as the ancestor (block offset
+     * and rank; -1 for the root) when {@code atOrAboveNodeLevel}, moves to the child's block or, at a leaf, writes the results and retires the lane
      * (offset -1). Returns the number of lanes still descending.
      */
     private static int chooseChildren(FlatTree tree, long[] d, int group, int lanes, boolean atOrAboveNodeLevel,
-                                      int[] offset, long[] header, int[] ancestor, int[] wordsOut, int[] nodesOut) {
+                                      int[] offset, long[] header, long[] ancestor, int[] wordsOut, int[] nodesOut) {
         int active = 0;
         for (int l = 0; l < lanes; l++) {
             int o = offset[l];
@@ -70,7 +70,7 @@ final class GroupedDescent {
             int q = (group + l) * FrameFeatures.STRIDE;
             int rank = tree.nearest(o, header[l], d[q], d[q + 1], d[q + 2], d[q + 3]);
             if (atOrAboveNodeLevel) {
-                ancestor[l] = tree.node(o, rank);
+                ancestor[l] = ((long) o << 32) | rank;
             }
             int next = tree.next(header[l], rank);
             if (next >= 0) {
@@ -79,7 +79,8 @@ final class GroupedDescent {
             } else {
                 offset[l] = -1;
                 wordsOut[group + l] = ~next;
-                nodesOut[group + l] = ancestor[l];
+                long a = ancestor[l];
+                nodesOut[group + l] = a < 0 ? 0 : tree.node((int) (a >>> 32), (int) a);
             }
         }
         return active;
