@@ -152,13 +152,15 @@ final class FlatTree {
     }
 
     /**
-     * Reads one long from every cache line of the block at {@code offset}, so that its misses are in flight
-     * before the centres are compared; returns their sum so the reads cannot be dropped as unused.
+     * Reads one long from every cache line of the block at {@code offset} but the header's (read separately), so
+     * that its misses are in flight before the centres are compared; returns their sum so the reads cannot be
+     * dropped as unused. Longs 8 apart lie in consecutive lines, and the last long covers the last line.
      */
     long touch(int offset) {
         long[] b = blocks;
-        long sum = b[offset + stride - 1];
-        for (int p = offset; p < offset + stride; p += LINE_LONGS) {
+        int last = offset + stride - 1;
+        long sum = b[last];
+        for (int p = offset + LINE_LONGS; p < last; p += LINE_LONGS) {
             sum += b[p];
         }
         return sum;
