@@ -6,8 +6,9 @@ import revisit.features.FrameFeatures;
  * A trained visual vocabulary: a tree of binary descriptor centres whose leaves are the words, with an idf weight
  * per word (Nistér and Stewénius, "Scalable Recognition with a Vocabulary Tree", CVPR 2006).
  *
- * <p>The tree is stored flat ({@link FlatTree}): nodes numbered breadth-first from the root (0), the children of a
- * node contiguous, all centres and child links in one {@code long[]}. A descriptor descends from
+ * <p>Nodes are numbered breadth-first from the root (0), the children of a node contiguous; for lookups the tree is
+ * stored flat ({@link FlatTree}), one block of child centres per inner node in one {@code long[]}, and a frame's
+ * descriptors descend it in interleaved groups ({@link GroupedDescent}). A descriptor descends from
  * the root, at each node to the child whose centre is nearest in Hamming distance (the lowest-numbered child on a
  * tie), until it reaches a leaf; that leaf's word is the descriptor's word. Words are numbered by a depth-first
  * walk visiting children in order, so the words below any node form a contiguous range.
@@ -64,7 +65,7 @@ public final class Vocabulary {
             }
         }
         this.nodeDepth = shape.nodeDepth();
-        this.tree = new FlatTree(childCount, shape.firstChild(), nodeWord, centres);
+        this.tree = new FlatTree(childCount, shape.firstChild(), nodeWord, centres, branching);
         this.weights = weights;
         this.occupancy = occupancy;
         this.provenance = provenance;
@@ -158,10 +159,7 @@ public final class Vocabulary {
         if (wordsOut.length < n || nodesOut.length < n) {
             throw new IllegalArgumentException("output arrays shorter than the " + n + " features");
         }
-        long[] d = features.descriptors();
-        for (int i = 0; i < n; i++) {
-            wordsOut[i] = tree.descend(d, i, nodeLevel, nodesOut);
-        }
+        GroupedDescent.lookup(tree, features.descriptors(), n, nodeLevel, wordsOut, nodesOut);
     }
 
     /** Copy of the centre of {@code node} (4 longs). */
