@@ -24,10 +24,13 @@ import revisit.scenario.DriftingOdometry;
 final class DemoCommand implements Callable<Integer> {
 
     /**
-     * Labels of the demo: camera centres within 7 m and viewing directions within 80 degrees. In the yard two
+     * Labels of the demo: camera centres within 9 m and viewing directions within 80 degrees. In the yard two
      * cameras that close in place and heading see the same facade (checked by eye on the report's image pairs).
+     * The lanes put facades up to about 9 m from the camera: with a 7 m rule, the cross-lane closures of one
+     * facade from 8-9 m apart counted as false although their relative rotations were within 1-4 degrees of the
+     * truth (docs/SCAN.md).
      */
-    static final String MAX_DISTANCE_M = "7";
+    static final String MAX_DISTANCE_M = "9";
     static final String MAX_ANGLE_DEG = "80";
 
     @Spec
