@@ -31,7 +31,7 @@ class BenchCommandTest {
         String table = out.toString();
         for (String row : new String[] {"| 2 | FEATURES |", "| 2 | TOTAL |", "| 2 | wall per frame |",
             "| 1 | VERIFY |", "| 1 | wall per frame |", "| verification CPU ms |", "| <= 5.0 m, <= 50 deg |",
-            "| <= 7.0 m, <= 80 deg |", "| vocabulary node | ", "| brute force | "}) {
+            "| <= 9.0 m, <= 80 deg |", "| vocabulary node | ", "| brute force | "}) {
             assertTrue(table.contains(row), row + " missing in:\n" + table);
         }
         // 10 frames per session 0.2 s apart lie within the scan's 20 s exclusion window of each other, so only the
