@@ -35,6 +35,11 @@ final class PoseRecovery {
 
     private final VerificationConfig config;
     private final DecomposeEssential essentialDecomposition = new DecomposeEssential();
+    /** Relative MSAC cost difference under which two plane decompositions count as a tie (common practice). */
+    private static final double PLANE_TIE = 0.05;
+    /** Share of a plane's inliers that must see it in front for a decomposition to be physical (noise margin). */
+    private static final double VISIBLE_SHARE = 0.9;
+
     private final DecomposeHomography homographyDecomposition = new DecomposeHomography();
 
     PoseRecovery(VerificationConfig config) {
@@ -137,29 +142,67 @@ final class PoseRecovery {
         return Optional.of(new Refined(state, inliers, f));
     }
 
-    /** From a homography fit of a planar scene (undistorted pixels). */
+    /**
+     * From a homography fit of a planar scene (undistorted pixels). The decomposition gives up to four poses; the
+     * plane must lie in front of the first camera along every inlier's ray ({@code n . x_a > 0}, the visibility
+     * constraint of Malis and Vargas, INRIA RR-6303, 2007), which leaves two in general (Faugeras and Lustman
+     * 1988). Each of those is refined on the plane's inliers and scored by its MSAC epipolar cost over ALL
+     * putative matches, so matches off the plane decide between them; the lowest cost wins. The earlier rule, the
+     * cheirality count with a parallax threshold, leaned towards the wrong pose under forward motion, where points
+     * near the focus of expansion have too little parallax to count (measured on the invented yard: 6-9 degree
+     * pitch errors on short forward moves, docs/VERIFICATION.md). Costs within {@link #PLANE_TIE} of each other
+     * leave the pair flagged ambiguous.
+     */
     Recovered fromPlane(PointPairs p, AdaptiveRansac.Fit fit) {
         int[] inliers = indices(fit.inliers());
         double[] hn = Mat3.mul(p.kInverse, Mat3.mul(fit.model(), p.k));
         homographyDecomposition.decompose(DMatrixRMaj.wrap(3, 3, hn));
         List<Se3_F64> solutions = homographyDecomposition.getSolutionsSE();
-        double minSin = Cheirality.minSinParallax(p, config);
-        int[] net = new int[solutions.size()];
-        int best = 0;
+        List<Vector3D_F64> normals = homographyDecomposition.getSolutionsN();
+        double[] costs = new double[solutions.size()];
+        double[][] states = new double[solutions.size()][];
+        int best = -1;
         for (int s = 0; s < solutions.size(); s++) {
+            costs[s] = Double.POSITIVE_INFINITY;
+            if (!planeVisible(p, inliers, normals.get(s))) {
+                continue;
+            }
             Se3_F64 se = solutions.get(s);
-            net[s] = Cheirality.net(p, inliers, inliers.length, se.R.data, vec(se.T), minSin);
-            best = net[s] > net[best] ? s : best;
+            EpipolarPoseProblem problem = new EpipolarPoseProblem(p, inliers);
+            states[s] = LevenbergMarquardt.minimize(problem, EpipolarPoseProblem.state(se.R.data.clone(), vec(se.T)),
+                    config.refineIterations()).state();
+            costs[s] = epipolarCost(p, problem.fundamental(states[s]));
+            best = best < 0 || costs[s] < costs[best] ? s : best;
+        }
+        if (best < 0) {
+            return new Recovered(Outcome.POINTS_BEHIND_CAMERA, inliers, Optional.empty(), ResidualStats.none());
         }
         boolean ambiguous = false;
         for (int s = 0; s < solutions.size(); s++) {
-            ambiguous |= s != best && net[s] >= 0.9 * net[best] && differentPose(solutions.get(s), solutions.get(best));
+            ambiguous |= s != best && costs[s] <= (1 + PLANE_TIE) * costs[best]
+                    && differentPose(solutions.get(s), solutions.get(best));
         }
-        Se3_F64 chosen = solutions.get(best);
-        double[] state = LevenbergMarquardt.minimize(new EpipolarPoseProblem(p, inliers),
-                EpipolarPoseProblem.state(chosen.R.data.clone(), vec(chosen.T)), config.refineIterations())
-                .state();
-        return finish(p, inliers, state, ambiguous);
+        return finish(p, inliers, states[best], ambiguous);
+    }
+
+    /** True when at least {@link #VISIBLE_SHARE} of the inliers' rays in the first camera meet the plane in front. */
+    private static boolean planeVisible(PointPairs p, int[] inliers, Vector3D_F64 normal) {
+        int visible = 0;
+        for (int i : inliers) {
+            double[] ray = p.rayA(i);
+            visible += normal.x * ray[0] + normal.y * ray[1] + normal.z * ray[2] > 0 ? 1 : 0;
+        }
+        return visible >= VISIBLE_SHARE * inliers.length;
+    }
+
+    /** MSAC epipolar cost of a pixel fundamental matrix over all matches, cut at the inlier threshold. */
+    private double epipolarCost(PointPairs p, double[] fundamental) {
+        double cutSq = config.inlierThresholdPx() * config.inlierThresholdPx();
+        double cost = 0;
+        for (int i = 0; i < p.count; i++) {
+            cost += Math.min(p.epipolarSq(fundamental, i), cutSq);
+        }
+        return cost;
     }
 
     /** Drops inliers behind a camera, refits on the rest and builds the pose with its information. */
