@@ -77,13 +77,13 @@ class DemoCommandTest {
     void demoReportsPrecisionAndRecallAndWritesTheReport() throws IOException {
         Matcher m = Pattern.compile("at threshold 0\\.000: precision ([0-9.]+) recall ([0-9.]+)").matcher(output);
         assertTrue(m.find(), output);
-        // Measured with the demo's 9 m / 80 degree labels: precision 1.000, recall 0.625, and the same recall at
+        // Measured with the demo's 9 m / 80 degree labels: precision 1.000, recall 0.683, and the same recall at
         // 100 % precision (docs/SCAN.md). The bounds guard against regressions.
         assertTrue(Double.parseDouble(m.group(1)) >= 0.98, "precision fell:\n" + output);
-        assertTrue(Double.parseDouble(m.group(2)) >= 0.55, "recall fell:\n" + output);
+        assertTrue(Double.parseDouble(m.group(2)) >= 0.62, "recall fell:\n" + output);
         Matcher full = Pattern.compile("recall at 100% precision +([0-9.]+)").matcher(output);
         assertTrue(full.find(), output);
-        assertTrue(Double.parseDouble(full.group(1)) >= 0.55, "recall at full precision fell:\n" + output);
+        assertTrue(Double.parseDouble(full.group(1)) >= 0.62, "recall at full precision fell:\n" + output);
         assertTrue(Files.exists(dir.resolve("report/index.html")));
         assertTrue(Files.size(dir.resolve("scan/closures.edges.txt")) > 1000);
     }
