@@ -27,6 +27,18 @@ public interface FrameSource extends AutoCloseable {
      */
     Optional<Frame> next();
 
+    /**
+     * The next frame with its pixels possibly still to be decoded ({@link PendingFrame#decode()}, callable on
+     * another thread). Sources that must decode in order (video) decode here; image folders and lists defer it.
+     *
+     * @return the frame, or empty after the last one
+     * @throws BadFrameException when this frame is known to be unusable already
+     * @throws BadInputException when the source as a whole cannot be read further
+     */
+    default Optional<PendingFrame> nextPending() {
+        return next().map(PendingFrame::of);
+    }
+
     /** Releases files and decoders; no exception beyond unchecked ones. */
     @Override
     void close();

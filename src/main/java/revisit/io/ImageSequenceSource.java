@@ -64,6 +64,22 @@ final class ImageSequenceSource implements FrameSource {
         }
     }
 
+    /** Defers the decoding, so that images can be decoded on worker threads; failures surface in decode(). */
+    @Override
+    public Optional<PendingFrame> nextPending() {
+        if (position >= selected.size()) {
+            return Optional.empty();
+        }
+        Selected s = selected.get(position++);
+        return Optional.of(new PendingFrame(s.index(), s.item().timeSeconds(), s.item().name(), () -> {
+            try {
+                return ImageFiles.readGray(s.item().image());
+            } catch (BadInputException e) {
+                throw new BadFrameException(s.index(), s.item().name(), e.getMessage(), e);
+            }
+        }));
+    }
+
     @Override
     public void close() {
         position = selected.size();

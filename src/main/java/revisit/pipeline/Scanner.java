@@ -20,6 +20,7 @@ import revisit.io.BadFramePolicy;
 import revisit.io.Frame;
 import revisit.io.FrameSource;
 import revisit.io.FrameSourceOptions;
+import revisit.io.PendingFrame;
 import revisit.io.FrameSources;
 import revisit.io.StampedPose;
 import revisit.vocabulary.Vocabulary;
@@ -174,32 +175,42 @@ public final class Scanner {
             boolean exhausted = false;
             while (true) {
                 while (!exhausted && pending.size() < window) {
-                    long t0 = System.nanoTime();
-                    Optional<Frame> next;
+                    Optional<PendingFrame> next;
                     try {
-                        next = source.next();
+                        next = source.nextPending();
                     } catch (BadFrameException e) {
-                        skipped.add(e.getMessage());
-                        listener.frameSkipped(e.getMessage());
-                        if (config.scan().badFrames() == BadFramePolicy.STOP) {
-                            stop = e.getMessage();
-                            exhausted = true;
-                        }
+                        stop = skipOrStop(e, skipped, listener);
+                        exhausted = !stop.isEmpty();
                         continue;
                     }
-                    times.add(StageTimes.Stage.READ, System.nanoTime() - t0);
                     if (next.isEmpty()) {
                         exhausted = true;
                     } else if (next.get().index() > lastDone) {
-                        Frame f = next.get();
-                        pending.add(pool.submit(() -> processors.get().process(seq, f.index(), f.timeSeconds(),
-                                f.name(), f.image())));
+                        PendingFrame f = next.get();
+                        pending.add(pool.submit(() -> {
+                            long t0 = System.nanoTime();
+                            Frame frame = f.decode();
+                            times.add(StageTimes.Stage.READ, System.nanoTime() - t0);
+                            return processors.get().process(seq, frame.index(), frame.timeSeconds(), frame.name(),
+                                    frame.image());
+                        }));
                     }
                 }
                 if (pending.isEmpty()) {
                     break;
                 }
-                FrameRecord r = await(pending.poll());
+                FrameRecord r;
+                try {
+                    r = await(pending.poll());
+                } catch (BadFrameException e) {
+                    stop = skipOrStop(e, skipped, listener);
+                    if (!stop.isEmpty()) {
+                        pending.forEach(p -> p.cancel(true));
+                        pending.clear();
+                        exhausted = true;
+                    }
+                    continue;
+                }
                 if (cache.isPresent()) {
                     cache.get().append(r);
                     if (++sinceSync >= config.scan().checkpointEveryFrames()) {
@@ -212,6 +223,13 @@ public final class Scanner {
         }
         cache.ifPresent(FrameCache::sync);
         return stop;
+    }
+
+    /** Records a bad frame; returns its message when the policy is to stop, else "". */
+    private String skipOrStop(BadFrameException e, List<String> skipped, ScanListener listener) {
+        skipped.add(e.getMessage());
+        listener.frameSkipped(e.getMessage());
+        return config.scan().badFrames() == BadFramePolicy.STOP ? e.getMessage() : "";
     }
 
     private static FrameRecord await(Future<FrameRecord> f) {
