@@ -96,7 +96,8 @@ final class MetricUpgrade {
      * The metric pose in {@link RelativePose}'s convention. {@link MetricPose} perturbs on the right,
      * {@code R exp(omega), t + R v} with order (omega, v); {@link RelativePose} on the left, {@code exp(dtheta) R,
      * t + dt}, order (dt, dtheta). To first order {@code (dt, dtheta) = J (v, omega)} with {@code J = diag(R, R)},
-     * so the information becomes {@code J I J^T} (J is orthogonal).
+     * so the information becomes {@code J I J^T} (J is orthogonal): the inverse of the export conversion
+     * {@link ClosureFactory#toLocalPerturbation}, which is that conversion with {@code R^T}.
      */
     static RelativePose toRelativePose(MetricPose pose) {
         Se3_F64 se3 = pose.aFromB();
@@ -112,31 +113,9 @@ final class MetricUpgrade {
                 reordered[a * 6 + b] = info[((a + 3) % 6) * 6 + (b + 3) % 6];
             }
         }
-        double[] j = new double[36];
-        for (int blk = 0; blk < 2; blk++) {
-            for (int a = 0; a < 3; a++) {
-                for (int b = 0; b < 3; b++) {
-                    j[(blk * 3 + a) * 6 + blk * 3 + b] = r[a * 3 + b];
-                }
-            }
-        }
-        double[] rotated = multiply(multiply(j, reordered, false), j, true);
+        double[] rT = {r[0], r[3], r[6], r[1], r[4], r[7], r[2], r[5], r[8]};
+        double[] rotated = ClosureFactory.toLocalPerturbation(reordered, rT);
         return new RelativePose(r, direction, Optional.of(t), rotated, false);
-    }
-
-    /** a * b, or a * b^T when {@code transposeB}; 6x6 row-major. */
-    private static double[] multiply(double[] a, double[] b, boolean transposeB) {
-        double[] out = new double[36];
-        for (int i = 0; i < 6; i++) {
-            for (int k = 0; k < 6; k++) {
-                double sum = 0;
-                for (int m = 0; m < 6; m++) {
-                    sum += a[i * 6 + m] * (transposeB ? b[k * 6 + m] : b[m * 6 + k]);
-                }
-                out[i * 6 + k] = sum;
-            }
-        }
-        return out;
     }
 
     /** Angle of R1^T R2, degrees. */
