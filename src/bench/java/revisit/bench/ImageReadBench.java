@@ -43,4 +43,10 @@ public class ImageReadBench {
     public GrayU8 readGray() {
         return ImageFiles.readGray(file);
     }
+
+    /** ImageIO's decoding alone (no grey conversion), the path PNG frames took before {@code PngReader}. */
+    @Benchmark
+    public java.awt.image.BufferedImage decodeWithImageIo() throws java.io.IOException {
+        return javax.imageio.ImageIO.read(file.toFile());
+    }
 }

@@ -21,19 +21,29 @@ final class BenchTables {
     static void header(PrintWriter o, Path scenario, Path vocabulary, List<SequenceInput> sessions) {
         o.println("bench: scenario " + scenario + ", vocabulary " + vocabulary + ", sessions "
                 + sessions.stream().map(SequenceInput::name).toList());
+        o.println("(timed after a warm-up scan of the first " + BenchCommand.WARM_UP_FRAMES + " frames of "
+                + sessions.get(0).name() + "; CPU is thread CPU time, per frame except verify, which is per "
+                + "verified query)");
         o.println();
-        o.println("| threads | stage | count | mean ms | p99 ms |");
-        o.println("|---|---|---|---|---|");
+        o.println("| threads | stage | count | mean ms | p99 ms | mean CPU ms |");
+        o.println("|---|---|---|---|---|---|");
         o.flush();
     }
 
     static void stages(PrintWriter o, int threads, ScanResult r, long wallNanos) {
         int frames = r.times().summary(StageTimes.Stage.READ).count();
+        double cpuMs = 0;
         for (StageTimes.Stage s : StageTimes.Stage.values()) {
             StageTimes.Summary m = r.times().summary(s);
-            o.println(f("| %d | %s | %d | %.2f | %.2f |", threads, s, m.count(), m.meanMs(), m.p99Ms()));
+            o.println(f("| %d | %s | %d | %.2f | %.2f | %.2f |", threads, s, m.count(), m.meanMs(), m.p99Ms(),
+                    m.meanCpuMs()));
+            if (s != StageTimes.Stage.QUERY && s != StageTimes.Stage.VERIFY) {
+                cpuMs += m.meanCpuMs() * m.count();
+            }
         }
-        o.println(f("| %d | wall per frame | %d | %.2f | |", threads, frames, wallNanos / 1e6 / Math.max(1, frames)));
+        o.println(f("| %d | CPU per frame (read + features + words + in-order total) | %d | | | %.2f |", threads,
+                frames, cpuMs / Math.max(1, frames)));
+        o.println(f("| %d | wall per frame | %d | %.2f | | |", threads, frames, wallNanos / 1e6 / Math.max(1, frames)));
         o.flush();
     }
 

@@ -25,15 +25,13 @@ final class FrameProcessor {
     }
 
     FrameRecord process(int sequence, int frame, double time, String name, GrayU8 image) {
-        long t0 = System.nanoTime();
+        StageTimes.Mark t0 = StageTimes.mark();
         FrameFeatures f = extractor.extract(image);
-        long t1 = System.nanoTime();
+        StageTimes.Mark t1 = times.stop(StageTimes.Stage.FEATURES, t0);
         int[] words = new int[f.count()];
         int[] nodes = new int[f.count()];
         vocabulary.lookup(f, nodeLevel, words, nodes);
-        long t2 = System.nanoTime();
-        times.add(StageTimes.Stage.FEATURES, t1 - t0);
-        times.add(StageTimes.Stage.WORDS, t2 - t1);
+        times.stop(StageTimes.Stage.WORDS, t1);
         return new FrameRecord(sequence, frame, time, name, f, words, nodes);
     }
 }

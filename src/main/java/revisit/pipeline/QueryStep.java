@@ -85,9 +85,9 @@ final class QueryStep {
     }
 
     QueryTrace handle(FrameRecord r) {
-        long t0 = System.nanoTime();
+        StageTimes.Mark t0 = StageTimes.mark();
         QueryResult qr = search.addAndQuery(new FrameWords(r.sequence(), r.frame(), r.time(), r.words(), r.nodes()));
-        times.add(StageTimes.Stage.QUERY, System.nanoTime() - t0);
+        StageTimes.Mark t1 = times.stop(StageTimes.Stage.QUERY, t0);
         frames.put(key(r.sequence(), r.frame()), r);
         QueryTrace trace;
         if (qr.candidates().isEmpty()) {
@@ -98,11 +98,10 @@ final class QueryStep {
             trace = new QueryTrace(r.sequence(), r.frame(), r.time(), QueryStage.PROPOSED, best.sequenceId(),
                     best.frameId(), best.normalisedScore(), OptionalInt.empty(), qr.consistency().reason());
         } else {
-            long t1 = System.nanoTime();
             trace = verify(r, qr);
-            times.add(StageTimes.Stage.VERIFY, System.nanoTime() - t1);
+            times.stop(StageTimes.Stage.VERIFY, t1);
         }
-        times.add(StageTimes.Stage.TOTAL, System.nanoTime() - t0);
+        times.stop(StageTimes.Stage.TOTAL, t0);
         traces.add(trace);
         return trace;
     }

@@ -111,11 +111,12 @@ public final class ScanOutputs {
             long n = r.traces().stream().filter(t -> t.stage() == s).count();
             sb.append(String.format(Locale.ROOT, "queries %-12s %d%n", s.name().toLowerCase(Locale.ROOT), n));
         }
-        sb.append(String.format(Locale.ROOT, "%-9s %7s %9s %9s%n", "stage", "count", "mean ms", "p99 ms"));
+        sb.append(String.format(Locale.ROOT, "%-9s %7s %9s %9s %9s%n", "stage", "count", "mean ms", "p99 ms",
+                "cpu ms"));
         for (StageTimes.Stage st : StageTimes.Stage.values()) {
             StageTimes.Summary s = r.times().summary(st);
-            sb.append(String.format(Locale.ROOT, "%-9s %7d %9.2f %9.2f%n", st.name().toLowerCase(Locale.ROOT),
-                    s.count(), s.meanMs(), s.p99Ms()));
+            sb.append(String.format(Locale.ROOT, "%-9s %7d %9.2f %9.2f %9.2f%n", st.name().toLowerCase(Locale.ROOT),
+                    s.count(), s.meanMs(), s.p99Ms(), s.meanCpuMs()));
         }
         if (!r.stoppedEarly().isEmpty()) {
             sb.append("stopped early: ").append(r.stoppedEarly()).append('\n');

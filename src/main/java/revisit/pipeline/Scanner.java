@@ -84,6 +84,14 @@ public final class Scanner {
         }
     }
 
+    /**
+     * Frames each worker may run ahead of the in-order thread. Verification is bursty (a query with two failing
+     * candidates costs 20-30 ms of CPU at 640x480, against about 12 ms of decoding and extraction per frame), so a
+     * short queue leaves the workers idle during a burst; 8 per worker holds about 100 ms of their work and costs
+     * about 60 KB per frame record (1000 features).
+     */
+    static final int FRAMES_AHEAD_PER_THREAD = 8;
+
     private final ScanConfig config;
     private final Vocabulary vocabulary;
     private final Optional<CameraModel> camera;
@@ -166,7 +174,7 @@ public final class Scanner {
         FrameSourceOptions so = options.sourceOptions().withFrameRateHz(config.scan().frameRateHz());
         ThreadLocal<FrameProcessor> processors = ThreadLocal.withInitial(() -> new FrameProcessor(config.features(),
                 vocabulary, config.scan().matchingNodeLevel(), times));
-        int window = 2 * config.scan().effectiveThreads() + 1;
+        int window = FRAMES_AHEAD_PER_THREAD * config.scan().effectiveThreads() + 1;
         ArrayDeque<Future<FrameRecord>> pending = new ArrayDeque<>();
         String stop = "";
         int sinceSync = 0;
@@ -188,9 +196,9 @@ public final class Scanner {
                     } else if (next.get().index() > lastDone) {
                         PendingFrame f = next.get();
                         pending.add(pool.submit(() -> {
-                            long t0 = System.nanoTime();
+                            StageTimes.Mark t0 = StageTimes.mark();
                             Frame frame = f.decode();
-                            times.add(StageTimes.Stage.READ, System.nanoTime() - t0);
+                            times.stop(StageTimes.Stage.READ, t0);
                             return processors.get().process(seq, frame.index(), frame.timeSeconds(), frame.name(),
                                     frame.image());
                         }));
