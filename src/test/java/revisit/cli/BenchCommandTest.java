@@ -37,5 +37,15 @@ class BenchCommandTest {
         // 10 frames per session 0.2 s apart lie within the scan's 20 s exclusion window of each other, so only the
         // 10 x 10 cross-session pairs are allowed (ExclusionWindow: other sequences are never excluded).
         assertTrue(table.contains("| verifications | 100 |"), table);
+
+        StringWriter timing = new StringWriter();
+        assertEquals(0, run(timing, err, "bench", "--scenario", yard.toString(), "--frames", "10", "--timing-only"),
+                err.toString());
+        String times = timing.toString();
+        assertTrue(!times.contains("| verifications |"), "--timing-only skips the exhaustive comparison:\n" + times);
+        java.util.regex.Matcher cpu = java.util.regex.Pattern
+                .compile("\\| 2 \\| CPU per frame \\([^|]*\\| 20 \\| \\| \\| ([0-9.]+) \\|").matcher(times);
+        assertTrue(cpu.find(), "CPU per frame row over the 20 frames missing in:\n" + times);
+        assertTrue(Double.parseDouble(cpu.group(1)) > 0, "thread CPU time was measured: " + cpu.group(0));
     }
 }
