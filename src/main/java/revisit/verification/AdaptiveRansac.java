@@ -161,7 +161,8 @@ final class AdaptiveRansac {
             all[i] = i;
         }
         Fit fit = refine(all, n, start, residual, refitter, thresholdSq, it);
-        return Optional.of(new Fit(fit.model(), fit.inliers(), fit.inlierCount(), fit.cost(), it, List.copyOf(earlier)));
+        return Optional.of(new Fit(fit.model(), fit.inliers(), fit.inlierCount(), fit.cost(), it,
+                List.copyOf(earlier)));
     }
 
     /**

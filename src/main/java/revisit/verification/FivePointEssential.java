@@ -117,7 +117,8 @@ final class FivePointEssential {
 
     /**
      * {@code out += scale * p * linear} for p supported on {@code support} and a linear polynomial. Unrolled over
-     * the four linear terms: the loop over LINEAR with a PRODUCT lookup was 19% of a five-point sample (JFR profile).
+     * the four linear terms: the loop over LINEAR with a PRODUCT lookup was 19% of a five-point sample in a JFR
+     * profile.
      */
     private static void multiplyAdd(double[] p, int[] support, double[] linear, double scale, double[] out) {
         double lx = scale * linear[12];
@@ -137,7 +138,8 @@ final class FivePointEssential {
     /**
      * Elimination of the first ten monomials with partial pivoting, leaving rows 4-9 in reduced form (the only
      * rows {@link #buildDeterminant} reads): forward elimination, then back substitution of those rows alone,
-     * about two thirds of the work of a full Gauss-Jordan pass (which was 13% of a five-point sample, JFR profile). False when singular.
+     * about two thirds of the work of a full Gauss-Jordan pass (which was 13% of a five-point sample in a JFR
+     * profile). False when singular.
      */
     private boolean eliminate() {
         for (int c = 0; c < 10; c++) {

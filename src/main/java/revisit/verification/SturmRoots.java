@@ -172,7 +172,7 @@ final class SturmRoots {
         return count;
     }
 
-    /** Insertion sort of the first count roots (at most ten; Arrays.sort was 7% of a five-point sample in a JFR profile). */
+    /** Insertion sort of the first count roots (at most ten; Arrays.sort was 7% of a five-point sample, JFR). */
     private void sortRoots(int count) {
         for (int i = 1; i < count; i++) {
             double v = roots[i];
