@@ -15,6 +15,8 @@ final class SturmRoots {
     /** Remainder coefficients below this share of the dividend's largest are treated as zero. */
     private static final double ZERO = 1e-13;
     private static final int MAX_SPLITS = 400;
+    /** Unit roundoff of double precision, 2^-53. */
+    private static final double ROUNDOFF = 0x1p-53;
 
     private final double[][] chain = new double[MAX_DEGREE + 1][MAX_DEGREE + 1];
     private final int[] degree = new int[MAX_DEGREE + 1];
@@ -211,7 +213,11 @@ final class SturmRoots {
     /**
      * Newton's method kept inside the bracket [a, b] where p changes sign; a step that leaves the bracket or that
      * would not halve the one before it is replaced by bisection (Numerical Recipes sec. 9.4, "rtsafe"). p and p'
-     * come from one Horner pass over p (two interleaved recurrences) instead of two evaluations.
+     * come from one Horner pass over p (two interleaved recurrences) instead of two evaluations. It also stops
+     * when |p(x)| is within the rounding error bound of Horner's rule, {@code 2 d u sum |c_i| |x|^i} (Higham,
+     * Accuracy and Stability of Numerical Algorithms, 2nd ed. 2002, sec. 5.1): closer to the root the sign of p
+     * is noise and the safeguard only bisected on (on the 200 matches without geometry of VerificationCpuTime,
+     * 17.6 steps per root, 10.9 of them bisections, with the 1e-15 step rule alone; 8.1 and 1.6 with this stop).
      */
     private double polish(double a, double b, double pa) {
         double lo = pa < 0 ? a : b;
@@ -224,9 +230,15 @@ final class SturmRoots {
         for (int it = 0; it < 200; it++) {
             double f = p[d];
             double df = 0;
+            double ax = Math.abs(x);
+            double magnitude = Math.abs(f);
             for (int k = d - 1; k >= 0; k--) {
                 df = df * x + f;
                 f = f * x + p[k];
+                magnitude = magnitude * ax + Math.abs(p[k]);
+            }
+            if (Math.abs(f) <= 2 * d * ROUNDOFF * magnitude) {
+                return x;
             }
             if (f < 0) {
                 lo = x;
