@@ -79,11 +79,7 @@ final class AdaptiveRansac {
      */
     static Optional<Fit> run(int n, Sampler sampler, Residual residual, Refitter refitter, double thresholdSq,
                              int minSupport, VerificationConfig config) {
-        int[] all = new int[n];
-        for (int i = 0; i < n; i++) {
-            all[i] = i;
-        }
-        return run(n, all, config.maxIterations(), (double) minSupport / n, sampler, residual, refitter,
+        return run(n, identity(n), config.maxIterations(), (double) minSupport / n, sampler, residual, refitter,
                 thresholdSq, config);
     }
 
@@ -116,7 +112,8 @@ final class AdaptiveRansac {
         SprtSchedule schedule = new SprtSchedule(s, minShare, sampler.sampleCost(), config.confidence());
         SplittableRandom random = new SplittableRandom(config.seed());
         int[] order = pool.clone();
-        int[] checks = schedule.current() == null ? pool : shuffled(pool, new SplittableRandom(config.seed()).split());
+        int[] checks = schedule.current() == null ? pool
+                : shuffled(pool, new SplittableRandom(config.seed()).split());
         List<double[]> models = new ArrayList<>();
         List<double[]> earlier = new ArrayList<>();
         Fit best = null;
@@ -124,12 +121,7 @@ final class AdaptiveRansac {
         int it = 0;
         while (it < maxIterations && !schedule.done()) {
             it++;
-            for (int k = 0; k < s; k++) {
-                int pick = k + random.nextInt(size - k);
-                int tmp = order[k];
-                order[k] = order[pick];
-                order[pick] = tmp;
-            }
+            drawSample(random, order, s);
             models.clear();
             sampler.fit(order, s, models);
             schedule.sampled(models.size());
@@ -142,10 +134,7 @@ final class AdaptiveRansac {
                 if (cost < bound) {
                     Fit local = refine(pool, n, m, residual, refitter, thresholdSq, it);
                     if (best != null) {
-                        earlier.add(0, best.model());
-                        if (earlier.size() > EARLIER) {
-                            earlier.remove(EARLIER);
-                        }
+                        remember(earlier, best.model());
                     }
                     best = local;
                     schedule.newBest((double) best.inlierCount() / size);
@@ -156,11 +145,7 @@ final class AdaptiveRansac {
             return Optional.empty();
         }
         double[] start = best != null ? best.model() : longestRejected;
-        int[] all = new int[n];
-        for (int i = 0; i < n; i++) {
-            all[i] = i;
-        }
-        Fit fit = refine(all, n, start, residual, refitter, thresholdSq, it);
+        Fit fit = refine(identity(n), n, start, residual, refitter, thresholdSq, it);
         return Optional.of(new Fit(fit.model(), fit.inliers(), fit.inlierCount(), fit.cost(), it,
                 List.copyOf(earlier)));
     }
@@ -194,6 +179,32 @@ final class AdaptiveRansac {
             }
         }
         return cost;
+    }
+
+    /** Moves a uniform random sample of s distinct entries of {@code order} to its front (partial Fisher-Yates). */
+    private static void drawSample(SplittableRandom random, int[] order, int s) {
+        for (int k = 0; k < s; k++) {
+            int pick = k + random.nextInt(order.length - k);
+            int tmp = order[k];
+            order[k] = order[pick];
+            order[pick] = tmp;
+        }
+    }
+
+    /** Puts a replaced best model first in {@code earlier}, keeping at most {@link #EARLIER}. */
+    private static void remember(List<double[]> earlier, double[] model) {
+        earlier.add(0, model);
+        if (earlier.size() > EARLIER) {
+            earlier.remove(EARLIER);
+        }
+    }
+
+    private static int[] identity(int n) {
+        int[] all = new int[n];
+        for (int i = 0; i < n; i++) {
+            all[i] = i;
+        }
+        return all;
     }
 
     /** A copy of {@code a} in random order (Fisher-Yates). */
