@@ -112,8 +112,7 @@ final class AdaptiveRansac {
         SprtSchedule schedule = new SprtSchedule(s, minShare, sampler.sampleCost(), config.confidence());
         SplittableRandom random = new SplittableRandom(config.seed());
         int[] order = pool.clone();
-        int[] checks = schedule.current() == null ? pool
-                : shuffled(pool, new SplittableRandom(config.seed()).split());
+        int[] checks = schedule.testing() ? shuffled(pool, new SplittableRandom(config.seed()).split()) : pool;
         List<double[]> models = new ArrayList<>();
         List<double[]> earlier = new ArrayList<>();
         Fit best = null;
@@ -141,13 +140,16 @@ final class AdaptiveRansac {
                 }
             }
         }
-        if (best == null && longestRejected == null) {
-            return Optional.empty();
-        }
-        double[] start = best != null ? best.model() : longestRejected;
-        Fit fit = refine(identity(n), n, start, residual, refitter, thresholdSq, it);
-        return Optional.of(new Fit(fit.model(), fit.inliers(), fit.inlierCount(), fit.cost(), it,
-                List.copyOf(earlier)));
+        return best == null && longestRejected == null ? Optional.empty()
+                : Optional.of(finish(best != null ? best.model() : longestRejected, n, residual, refitter,
+                thresholdSq, it, earlier));
+    }
+
+    /** The final refit over all n points, with the run's sample count and earlier best models. */
+    private static Fit finish(double[] model, int n, Residual residual, Refitter refitter, double thresholdSq,
+                              int iterations, List<double[]> earlier) {
+        Fit fit = refine(identity(n), n, model, residual, refitter, thresholdSq, iterations);
+        return new Fit(fit.model(), fit.inliers(), fit.inlierCount(), fit.cost(), iterations, List.copyOf(earlier));
     }
 
     /**
@@ -156,10 +158,10 @@ final class AdaptiveRansac {
      */
     private static double cost(double[] m, int[] points, Residual residual, double thresholdSq, double bound,
                                SprtSchedule schedule) {
-        Sprt test = schedule.current();
-        double logConsistent = test == null ? 0 : test.logConsistent();
-        double logInconsistent = test == null ? 0 : test.logInconsistent();
-        double logThreshold = test == null ? Double.POSITIVE_INFINITY : test.logThreshold();
+        boolean testing = schedule.testing();
+        double logConsistent = testing ? schedule.current().logConsistent() : 0;
+        double logInconsistent = testing ? schedule.current().logInconsistent() : 0;
+        double logThreshold = testing ? schedule.current().logThreshold() : Double.POSITIVE_INFINITY;
         double cost = 0;
         double logRatio = 0;
         int consistent = 0;
