@@ -22,27 +22,33 @@ public final class VerificationCpuTime {
         VerificationBenchmark b = new VerificationBenchmark();
         b.setup();
         ThreadMXBean mx = ManagementFactory.getThreadMXBean();
+        CpuTimeCounters c = new CpuTimeCounters();
         for (int round = 0; round < 3; round++) {
-            report("matchBruteForce", mx, 200, b::matchBruteForce);
-            report("matchWithinNodes", mx, 200, b::matchWithinNodes);
-            report("verifyOnly", mx, 200, b::verifyOnly);
-            report("matchAndVerify", mx, 200, b::matchAndVerify);
-            report("matchWithinNodesAndVerify", mx, 200, b::matchWithinNodesAndVerify);
-            report("matchAndRejectFarPair", mx, 20, b::matchAndRejectFarPair);
-            report("verifyMatchesWithoutGeometry", mx, 20, b::verifyMatchesWithoutGeometry);
+            report("matchBruteForce", mx, 200, () -> b.matchBruteForce(c));
+            report("matchWithinNodes", mx, 200, () -> b.matchWithinNodes(c));
+            report("verifyOnly", mx, 200, () -> b.verifyOnly(c));
+            report("matchAndVerify", mx, 200, () -> b.matchAndVerify(c));
+            report("matchWithinNodesAndVerify", mx, 200, () -> b.matchWithinNodesAndVerify(c));
+            report("matchAndRejectFarPair", mx, 20, () -> b.matchAndRejectFarPair(c));
+            report("matchWithinNodesAndRejectFar", mx, 20, () -> b.matchWithinNodesAndRejectFarPair(c));
+            report("verifyMatchesWithoutGeometry", mx, 20, () -> b.verifyMatchesWithoutGeometry(c));
         }
-        Correspondences all = b.matchBruteForce();
-        Correspondences nodes = b.matchWithinNodes();
-        Verification va = b.matchAndVerify();
-        Verification vn = b.matchWithinNodesAndVerify();
+        Correspondences all = b.matchBruteForce(c);
+        Correspondences nodes = b.matchWithinNodes(c);
+        Verification va = b.matchAndVerify(c);
+        Verification vn = b.matchWithinNodesAndVerify(c);
         System.out.printf("brute force: %d matches, %s %s, %d inliers, %d samples%n", all.count(), va.outcome(),
                 va.model(), va.inlierCount(), va.iterations());
         System.out.printf("within nodes: %d matches, %s %s, %d inliers, %d samples%n", nodes.count(), vn.outcome(),
                 vn.model(), vn.inlierCount(), vn.iterations());
-        Verification far = b.matchAndRejectFarPair();
+        Verification far = b.matchAndRejectFarPair(c);
         System.out.printf("far pair: %d matches, %s %s, %d inliers, %d samples%n", far.matchCount(), far.outcome(),
                 far.model(), far.inlierCount(), far.iterations());
-        Verification none = b.verifyMatchesWithoutGeometry();
+        Verification farNodes = b.matchWithinNodesAndRejectFarPair(c);
+        System.out.printf("far pair within nodes: %d matches, %s %s, %d inliers, %d samples%n",
+                farNodes.matchCount(), farNodes.outcome(), farNodes.model(), farNodes.inlierCount(),
+                farNodes.iterations());
+        Verification none = b.verifyMatchesWithoutGeometry(c);
         System.out.printf("no geometry: %d matches, %s %s, %d inliers, %d samples%n", none.matchCount(),
                 none.outcome(), none.model(), none.inlierCount(), none.iterations());
         Optional.of(mx).ifPresent(m -> System.out.println("load " + ManagementFactory.getOperatingSystemMXBean()

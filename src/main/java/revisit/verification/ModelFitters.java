@@ -20,6 +20,11 @@ import org.ddogleg.struct.DogArray;
  */
 final class ModelFitters {
 
+    /** Sample costs in Sampson residual evaluations (t_M of the SPRT), measured: see docs/VERIFICATION.md. */
+    private static final double ESSENTIAL_SAMPLE_COST = 2000;
+    private static final double FUNDAMENTAL_SAMPLE_COST = 1000;
+    private static final double HOMOGRAPHY_SAMPLE_COST = 500;
+
     /** Our own solver: BoofCV's NISTER_5 runs interpreted (see FivePointEssential), ~100 us per sample. */
     private final FivePointEssential essentialFive = new FivePointEssential();
     private final List<double[]> essentials = new ArrayList<>();
@@ -38,7 +43,7 @@ final class ModelFitters {
 
     /** Five-point essential samples in normalised coordinates, returned as pixel fundamental matrices. */
     AdaptiveRansac.Sampler essential(PointPairs p) {
-        return sampler(5, (idx, size, out) -> {
+        return sampler(5, ESSENTIAL_SAMPLE_COST, (idx, size, out) -> {
             for (int i = 0; i < 5; i++) {
                 AssociatedPair q = p.normalized.get(idx[i]);
                 sampleXa[i] = q.p1.x;
@@ -58,7 +63,7 @@ final class ModelFitters {
     AdaptiveRansac.Sampler fundamental(PointPairs p, VerificationConfig.FundamentalSolver solver) {
         boolean seven = solver == VerificationConfig.FundamentalSolver.SEVEN_POINT;
         EstimateNofEpipolar alg = seven ? fundamentalSeven : fundamentalEight;
-        return sampler(seven ? 7 : 8, (idx, size, out) -> {
+        return sampler(seven ? 7 : 8, FUNDAMENTAL_SAMPLE_COST, (idx, size, out) -> {
             if (alg.process(gather(p.pixels, idx, size), solutions)) {
                 for (int i = 0; i < solutions.size; i++) {
                     out.add(solutions.get(i).data.clone());
@@ -69,7 +74,7 @@ final class ModelFitters {
 
     /** Four-point homography samples in pixels (normalised DLT, H&amp;Z algorithm 4.2). */
     AdaptiveRansac.Sampler homography(PointPairs p) {
-        return sampler(4, (idx, size, out) -> dlt(p, idx, size).ifPresent(out::add));
+        return sampler(4, HOMOGRAPHY_SAMPLE_COST, (idx, size, out) -> dlt(p, idx, size).ifPresent(out::add));
     }
 
     /** Linear eight-point essential matrix on all inliers (singular values forced equal), in pixels. */
@@ -115,11 +120,16 @@ final class ModelFitters {
         void fit(int[] indices, int size, List<double[]> out);
     }
 
-    private static AdaptiveRansac.Sampler sampler(int size, Fit fit) {
+    private static AdaptiveRansac.Sampler sampler(int size, double cost, Fit fit) {
         return new AdaptiveRansac.Sampler() {
             @Override
             public int sampleSize() {
                 return size;
+            }
+
+            @Override
+            public double sampleCost() {
+                return cost;
             }
 
             @Override

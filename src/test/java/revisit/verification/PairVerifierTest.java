@@ -202,9 +202,12 @@ class PairVerifierTest {
         assertFalse(v.accepted(), "inliers " + v.inlierCount() + " model " + v.model());
     }
 
-    /** Fischler &amp; Bolles (CACM 1981) sample bound for an all-inlier sample of size s at inlier share w. */
-    private static long samplesBound(double w, int s, double p) {
-        return (long) Math.ceil(Math.log(1 - p) / Math.log(1 - Math.pow(w, s)));
+    /**
+     * Fischler &amp; Bolles (CACM 1981) sample bound for an all-inlier sample of size s at inlier share w, when the
+     * SPRT may reject the good model with probability alpha (Chum &amp; Matas, PAMI 2008).
+     */
+    private static long samplesBound(double w, int s, double p, double alpha) {
+        return (long) Math.ceil(Math.log(1 - p) / Math.log(1 - Math.pow(w, s) * (1 - alpha)));
     }
 
     @Test
@@ -215,7 +218,9 @@ class PairVerifierTest {
                     1.0, 1.0, SyntheticPair.Scene.GENERAL, SyntheticPair.CAMERA);
             Verification v = verifier.verify(s.a, s.b, s.matches, CAMERA);
             double share = (double) Math.max(config.minInliers(), Math.ceil(config.minInlierRatio() * count)) / count;
-            long bound = samplesBound(share, 5, config.confidence());
+            // alpha <= 1/A < 0.05: at epsilon >= 0.4, delta <= epsilon / 2, t_M = 2000 and at most 10 models per
+            // sample, A = t_M C / m_S + 1 + ln A exceeds 20 (SprtSchedule, Sprt.design)
+            long bound = samplesBound(share, 5, config.confidence(), 0.05);
             assertEquals(Outcome.NO_CONSENSUS, v.outcome(), count + " random matches");
             assertTrue(v.iterations() <= bound, count + " matches: " + v.iterations() + " samples, bound " + bound);
             assertTrue(bound < config.maxIterations(), "the bound, not the cap, stopped " + count + " matches");
