@@ -53,7 +53,7 @@ final class IntensityCentroid {
      */
     static double orientation(byte[] data, int centre, int stride) {
         int m10 = 0;
-        for (int u = 1; u <= HALF_WIDTH[0]; u++) {
+        for (int u = 1; u <= RADIUS; u++) {
             m10 += u * ((data[centre + u] & 0xFF) - (data[centre - u] & 0xFF));
         }
         int m01 = 0;
@@ -61,7 +61,8 @@ final class IntensityCentroid {
             int below = centre + v * stride;
             int above = centre - v * stride;
             int difference = (data[below] & 0xFF) - (data[above] & 0xFF);
-            for (int u = 1; u <= HALF_WIDTH[v]; u++) {
+            int h = HALF_WIDTH[v];
+            for (int u = 1; u <= h; u++) {
                 int belowRight = data[below + u] & 0xFF;
                 int aboveRight = data[above + u] & 0xFF;
                 int belowLeft = data[below - u] & 0xFF;
