@@ -7,10 +7,10 @@ import java.util.Arrays;
  * pixels of every queued pixel are first copied into 16 int arrays (one per circle position); the bright / dark
  * flags, the arc search and the score are then loops over those arrays with equal indices, the shape HotSpot's C2
  * vectorises, and the corners are written out without a branch per pixel. Testing each pixel on its own (a loop over
- * the circle, a table of arcs, a branch per side and per corner) cost about 25-30 ns per pixel on the levels of
- * 640x480 photos; this costs about 8-12 (FAST on all levels of pixabay car01, 49,000 tested pixels: 2.6 against
- * 1.75 ms; docs/FEATURES.md). Corners, scores and their order equal those of the per-pixel test. Not thread-safe:
- * one instance per segment test.
+ * the circle, a table of arcs, a branch per side and per corner) cost 23-30 ns per pixel on the levels of 640x480
+ * photos; this costs about 12 (FAST on the pre-tested rows of all levels of pixabay car01, 49,000 tested pixels:
+ * 2.6 against 1.75 ms, thread CPU time; docs/FEATURES.md). Corners, scores and their order equal those of the
+ * per-pixel test. Not thread-safe: one instance per segment test.
  */
 final class SegmentBatch {
 
