@@ -124,7 +124,7 @@ final class CornerDetector {
                 }
                 busy = n * DENSE_ROW_PIXELS_PER_CORNER;
             } else {
-                int n = segmentTest.scanRow(level.data, rowStart, level.stride, y, border, xTo);
+                int n = segmentTest.scanRow(level.data, rowStart, level.stride, rows, y, border, xTo);
                 queued |= n > 0;
                 busy = n * DENSE_ROW_PIXELS_PER_QUEUED;
             }

@@ -47,7 +47,7 @@ class DenseSegmentTestTest {
         for (int y = BORDER; y < image.height - BORDER; y++) {
             int rowStart = image.startIndex + y * image.stride;
             sparse.startLevel();
-            sparse.scanRow(image.data, rowStart, image.stride, y, BORDER, image.width - BORDER);
+            sparse.scanRow(image.data, rowStart, image.stride, rows, y, BORDER, image.width - BORDER);
             int n = sparse.flush(image.data);
             assertEquals(n, dense.scanRow(image.data, rowStart, image.stride, rows, y, BORDER,
                     image.width - BORDER), "corners in row " + y);
