@@ -21,8 +21,8 @@ import java.util.Arrays;
  * version of the pre-tests took 4.6 ms (FAST on all levels of a 640x480 photo) against about 1 ms for this one
  * (docs/FEATURES.md). Before them, one loop over the int rows (which C2 vectorises) flags the pixels whose top or
  * bottom circle pixel is beyond the threshold, which both pre-tests require, and groups of 8 without a flag are
- * skipped: on chair image000 only 20% of the groups of level 0 have one, and FAST took 0.82 against 0.96 ms
- * (thread CPU time). Pixels that pass both pre-tests are queued, and the full test runs on the whole level's queue
+ * skipped: on chair image000 only 20% of the groups of level 0 have one, and FAST took 0.82 ms against 0.96-1.01
+ * without it (thread CPU time, docs/FEATURES.md). Pixels that pass both pre-tests are queued, and the full test runs on the whole level's queue
  * at once ({@link SegmentBatch}). Not thread-safe: one instance per extractor.
  */
 final class FastSegmentTest {
