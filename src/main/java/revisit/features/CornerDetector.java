@@ -29,12 +29,20 @@ final class CornerDetector {
     /** FAST score per level pixel (row stride = level width); zero except at the current candidates. */
     private float[] scores = new float[0];
     private int[] candidates = new int[1024];
+    /** Number of corners of the current level recorded in {@link #candidates}. */
+    private int found;
     /**
      * Row busyness above which the whole-row test is used: one corner in this many pixels. Over the levels of three
      * 640x480 photos (thread CPU time, docs/FEATURES.md) 16 was about as fast as the pre-tested test alone on sparse
      * chair image000 and as the whole-row test alone on dense stairs01 (8.0 against 13.7 ms).
      */
     static final int DENSE_ROW_PIXELS_PER_CORNER = 16;
+    /**
+     * The same after a row of the pre-tested test, counted in pixels that passed the pre-tests (about 3.6 per corner
+     * on pixabay car01). 3, 4, 6 and 8 gave the same FAST time on chair, car01 and stairs01 within the noise
+     * (thread CPU time, docs/FEATURES.md).
+     */
+    static final int DENSE_ROW_PIXELS_PER_QUEUED = 4;
 
     CornerDetector(FeatureConfig config) {
         this.segmentTest = new FastSegmentTest(config.fastThreshold(), config.fastArc());
@@ -75,24 +83,8 @@ final class CornerDetector {
         if (scores.length < w * level.height) {
             scores = new float[w * level.height];
         }
-        if (denseTest != null) {
-            denseTest.startLevel();
-        }
-        int found = 0;
-        int previous = 0;
-        for (int y = border; y < level.height - border; y++) {
-            int n = scanRow(level, rows, y, border, previous);
-            previous = n;
-            if (found + n > candidates.length) {
-                candidates = Arrays.copyOf(candidates, Math.max(2 * candidates.length, found + n));
-            }
-            boolean dense = lastRowDense;
-            for (int k = 0; k < n; k++) {
-                int p = y * w + (dense ? denseTest.x(k) : segmentTest.x(k));
-                scores[p] = dense ? denseTest.score(k) : segmentTest.score(k);
-                candidates[found++] = p;
-            }
-        }
+        found = 0;
+        scanRows(level, rows, border);
         for (int k = 0; k < found; k++) {
             int p = candidates[k];
             if (isPeak(p, w)) {
@@ -104,19 +96,62 @@ final class CornerDetector {
         }
     }
 
-    /** Whether the last {@link #scanRow} used the whole-row test. */
-    private boolean lastRowDense;
-
     /**
-     * Runs the segment test on one row: the whole-row test when the previous row had more than one corner in
-     * {@value #DENSE_ROW_PIXELS_PER_CORNER} pixels, else the pre-tested one (both give the same corners).
+     * Runs the segment test on every row, recording the corners in row order: the whole-row test on a row after a
+     * busy one, else the pre-tests, whose queued pixels get the full test in one batch before the next whole-row
+     * test and at the end (both tests give the same corners).
      */
-    private int scanRow(GrayU8 level, int[][] rows, int y, int border, int previousCorners) {
-        int xTo = level.width - border;
-        int rowStart = level.startIndex + y * level.stride;
-        lastRowDense = denseTest != null && previousCorners * DENSE_ROW_PIXELS_PER_CORNER > xTo - border;
-        return lastRowDense ? denseTest.scanRow(level.data, rowStart, level.stride, rows, y, border, xTo)
-                : segmentTest.scanRow(level.data, rowStart, level.stride, border, xTo);
+    private void scanRows(GrayU8 level, int[][] rows, int border) {
+        if (denseTest != null) {
+            denseTest.startLevel();
+        }
+        segmentTest.startLevel();
+        int w = level.width;
+        int xTo = w - border;
+        int busy = 0;
+        boolean queued = false;
+        for (int y = border; y < level.height - border; y++) {
+            int rowStart = level.startIndex + y * level.stride;
+            if (denseTest != null && busy > xTo - border) {
+                if (queued) {
+                    flush(level);
+                    queued = false;
+                }
+                int n = denseTest.scanRow(level.data, rowStart, level.stride, rows, y, border, xTo);
+                reserve(n);
+                for (int k = 0; k < n; k++) {
+                    record(y * w + denseTest.x(k), denseTest.score(k));
+                }
+                busy = n * DENSE_ROW_PIXELS_PER_CORNER;
+            } else {
+                int n = segmentTest.scanRow(level.data, rowStart, level.stride, rows, y, border, xTo);
+                queued |= n > 0;
+                busy = n * DENSE_ROW_PIXELS_PER_QUEUED;
+            }
+        }
+        if (queued) {
+            flush(level);
+        }
+    }
+
+    /** Full test of the pixels queued by the pre-tests; records the corners. */
+    private void flush(GrayU8 level) {
+        int n = segmentTest.flush(level.data);
+        reserve(n);
+        for (int k = 0; k < n; k++) {
+            record(segmentTest.y(k) * level.width + segmentTest.x(k), segmentTest.score(k));
+        }
+    }
+
+    private void reserve(int more) {
+        if (found + more > candidates.length) {
+            candidates = Arrays.copyOf(candidates, Math.max(2 * candidates.length, found + more));
+        }
+    }
+
+    private void record(int p, int score) {
+        scores[p] = score;
+        candidates[found++] = p;
     }
 
     /** Strict 3x3 maximum of the score; of equal neighbours the first in raster order wins. */

@@ -3,9 +3,10 @@ package revisit.features;
 import java.lang.invoke.MethodHandles;
 import java.lang.invoke.VarHandle;
 import java.nio.ByteOrder;
+import java.util.Arrays;
 
 /**
- * The FAST segment test along one image row (Rosten, Porter and Drummond, "Faster and better: a machine learning
+ * The FAST segment test, row by row over one level (Rosten, Porter and Drummond, "Faster and better: a machine learning
  * approach to corner detection", IEEE TPAMI 32(1), 2010): a pixel is a corner when at least {@code arc} contiguous
  * pixels of the 16-pixel circle of radius 3 are all brighter than centre + threshold or all darker than
  * centre - threshold. Its score is BoofCV's: the summed absolute difference from the centre of the circle pixels
@@ -16,10 +17,13 @@ import java.nio.ByteOrder;
  * pixel must both be beyond the threshold on the same side; the same holds for the four diagonal circle pixels.
  * Both are evaluated eight pixels at a time: one 64-bit load takes eight neighbouring bytes, split into two words
  * of four 16-bit lanes, and per lane {@code v + 511 - c - t} has bit 9 set exactly when {@code v > c + t} (no lane
- * borrows, since the value stays in 2..766); likewise {@code c - t + 511 - v} for {@code v < c - t}. Only pixels
- * that pass both get the full test, a 16-bit mask of the circle looked up in a table of masks that hold a long
- * enough circular run. The per-pixel version of this code took 4.6 ms (FAST on all levels of a 640x480 photo)
- * against about 1 ms for this one (docs/FEATURES.md). Not thread-safe: one instance per extractor.
+ * borrows, since the value stays in 2..766); likewise {@code c - t + 511 - v} for {@code v < c - t}. The per-pixel
+ * version of the pre-tests took 4.6 ms (FAST on all levels of a 640x480 photo) against about 1 ms for this one
+ * (docs/FEATURES.md). Before them, one loop over the int rows (which C2 vectorises) flags the pixels whose top or
+ * bottom circle pixel is beyond the threshold, which both pre-tests require, and groups of 8 without a flag are
+ * skipped: on chair image000 only 20% of the groups of level 0 have one, and FAST took 0.82 ms against 0.96-1.01
+ * without it (thread CPU time, docs/FEATURES.md). Pixels that pass both pre-tests are queued, and the full test runs on the whole level's queue
+ * at once ({@link SegmentBatch}). Not thread-safe: one instance per extractor.
  */
 final class FastSegmentTest {
 
@@ -38,12 +42,13 @@ final class FastSegmentTest {
     private final int threshold;
     /** 511 - threshold in every lane. */
     private final long lanesK;
-    private final boolean[] arcs;
+    private final SegmentBatch batch;
     private final int[] circle = new int[16];
     private int stride = -1;
-    private int[] cornerX = new int[64];
-    private int[] cornerScore = new int[64];
-    private int count;
+    /** Row being scanned and the number of its pixels queued so far. */
+    private int row;
+    private int queued;
+    private int[] vertical = new int[0];
 
     /**
      * @param threshold intensity difference, grey levels, 1..254
@@ -53,46 +58,41 @@ final class FastSegmentTest {
         this.threshold = threshold;
         long k = 511 - threshold;
         this.lanesK = k | (k << 16) | (k << 32) | (k << 48);
-        this.arcs = arcTable(arc);
+        this.batch = new SegmentBatch(threshold, arc);
     }
 
-    /** For every 16-bit circular mask: does it hold a run of at least {@code arc} set bits? */
-    static boolean[] arcTable(int arc) {
-        boolean[] table = new boolean[1 << 16];
-        for (int mask = 0; mask < table.length; mask++) {
-            int doubled = mask | (mask << 16);
-            int run = doubled;
-            for (int k = 1; k < arc; k++) {
-                run &= doubled >>> k;
-            }
-            table[mask] = run != 0;
-        }
-        return table;
+    /** Forgets the pixels queued for the full test; call before the first row of every level. */
+    void startLevel() {
+        batch.clear();
     }
 
     /**
-     * Tests pixels {@code xFrom..xTo-1} of one row. The caller guarantees 3 pixels of image on every side of
-     * them and 8 readable bytes from {@code rowStart + xTo + 3 - 1} on.
+     * Pre-tests pixels {@code xFrom..xTo-1} of row {@code y} and queues those that pass for the full test in
+     * {@link #flush}. The caller guarantees 3 pixels of image on every side of them and 8 readable bytes
+     * from {@code rowStart + xTo + 3 - 1} on.
      *
-     * @param d        pixels
-     * @param rowStart index of column 0 of the row in {@code d}
+     * @param d         pixels
+     * @param rowStart  index of column 0 of the row in {@code d}
      * @param rowStride row stride of {@code d}
-     * @return number of corners found, readable through {@link #x(int)} and {@link #score(int)}
+     * @param rows      the same pixels as int rows, {@code rows[y][x]}
+     * @return number of pixels of the row queued
      */
-    int scanRow(byte[] d, int rowStart, int rowStride, int xFrom, int xTo) {
+    int scanRow(byte[] d, int rowStart, int rowStride, int[][] rows, int y, int xFrom, int xTo) {
         if (rowStride != stride) {
             stride = rowStride;
             for (int k = 0; k < 16; k++) {
                 circle[k] = CIRCLE[2 * k + 1] * stride + CIRCLE[2 * k];
             }
         }
-        if (cornerX.length < xTo) {
-            cornerX = new int[xTo];
-            cornerScore = new int[xTo];
-        }
-        count = 0;
+        verticalFlags(rows[y], rows[y - 3], rows[y + 3], xFrom, xTo);
+        int[] f = vertical;
+        row = y;
+        queued = 0;
         int s3 = 3 * rowStride;
         for (int x = xFrom; x < xTo; x += 8) {
+            if ((f[x] | f[x + 1] | f[x + 2] | f[x + 3] | f[x + 4] | f[x + 5] | f[x + 6] | f[x + 7]) >= 0) {
+                continue;
+            }
             int i = rowStart + x;
             long c = (long) LONGS.get(d, i);
             long u = (long) LONGS.get(d, i - s3);
@@ -106,7 +106,39 @@ final class FastSegmentTest {
                 diagonals(d, i, c, even & VALID_EVEN[valid], odd & VALID_ODD[valid], x);
             }
         }
-        return count;
+        return queued;
+    }
+
+    /**
+     * Runs the full test on every pixel queued since the last flush or {@link #startLevel()}, and empties the
+     * queue.
+     *
+     * @param d the pixels given to {@link #scanRow}
+     * @return number of corners, in the order the rows were scanned, readable through {@link #x(int)},
+     *         {@link #y(int)} and {@link #score(int)}
+     */
+    int flush(byte[] d) {
+        int n = batch.run(d, circle);
+        batch.clear();
+        return n;
+    }
+
+    /**
+     * vertical[x] is negative when the top or the bottom compass pixel of x is beyond the threshold on either side,
+     * a condition the pre-tests imply; zero past xTo. One loop over int rows that C2 vectorises.
+     */
+    private void verticalFlags(int[] c, int[] up, int[] down, int xFrom, int xTo) {
+        if (vertical.length < xTo + 8) {
+            vertical = new int[xTo + 8];
+        }
+        int[] f = vertical;
+        int t = threshold;
+        for (int x = xFrom; x < xTo; x++) {
+            int hi = c[x] + t;
+            int lo = c[x] - t;
+            f[x] = (hi - up[x]) | (hi - down[x]) | (up[x] - lo) | (down[x] - lo);
+        }
+        Arrays.fill(f, xTo, xTo + 8, 0);
     }
 
     /** Lanes of the even / odd word that lie within the first {@code n} pixels of a group of 8. */
@@ -143,56 +175,32 @@ final class FastSegmentTest {
         long sw = (long) LONGS.get(d, i + s2 - 2);
         even &= pairs(c & LOW, nw & LOW, se & LOW, ne & LOW, sw & LOW);
         odd &= pairs((c >>> 8) & LOW, (nw >>> 8) & LOW, (se >>> 8) & LOW, (ne >>> 8) & LOW, (sw >>> 8) & LOW);
-        fullTest(d, i, even, x);
-        fullTest(d, i + 1, odd, x + 1);
+        enqueue(i, even, x);
+        enqueue(i + 1, odd, x + 1);
     }
 
-    /** Full segment test of every lane with a flag; lane k is the pixel at offset 2k. */
-    private void fullTest(byte[] d, int i, long flags, int x) {
+    /** Queues the pixels of the flagged lanes (lane k: index i + 2k, column x + 2k). */
+    private void enqueue(int i, long flags, int x) {
         while (flags != 0) {
-            int bit = Long.numberOfTrailingZeros(flags);
-            int lane = bit >>> 4;
-            int p = i + 2 * lane;
-            int centre = d[p] & 0xFF;
-            int score = (bit & 15) == 9 ? sideScore(d, p, centre + threshold, centre, 1) : 0;
-            if (score == 0 && (flags & (1L << (16 * lane + 10))) != 0) {
-                score = sideScore(d, p, centre - threshold, centre, -1);
-            }
-            if (score > 0) {
-                cornerX[count] = x + 2 * lane;
-                cornerScore[count++] = score;
-            }
+            int lane = Long.numberOfTrailingZeros(flags) >>> 4;
+            batch.add(i + 2 * lane, x + 2 * lane, row);
+            queued++;
             flags &= ~(0xFFFFL << (16 * lane));
         }
     }
 
-    /**
-     * Score of the arc on one side: {@code sign} +1 tests for pixels above {@code limit}, -1 for pixels below.
-     *
-     * @return the summed |v - centre| over the side's pixels if they hold an arc, else 0
-     */
-    private int sideScore(byte[] d, int p, int limit, int centre, int sign) {
-        int mask = 0;
-        for (int k = 0; k < 16; k++) {
-            mask |= ((sign * (limit - (d[p + circle[k]] & 0xFF))) >>> 31) << k;
-        }
-        if (!arcs[mask]) {
-            return 0;
-        }
-        int sum = 0;
-        for (int k = 0; k < 16; k++) {
-            sum += ((mask >>> k) & 1) * Math.abs((d[p + circle[k]] & 0xFF) - centre);
-        }
-        return sum;
-    }
-
-    /** Column of corner {@code k} of the last scanned row. */
+    /** Column of corner {@code k} of the last flush. */
     int x(int k) {
-        return cornerX[k];
+        return batch.x(k);
     }
 
-    /** FAST score of corner {@code k} of the last scanned row. */
+    /** Row of corner {@code k} of the last flush. */
+    int y(int k) {
+        return batch.y(k);
+    }
+
+    /** FAST score of corner {@code k} of the last flush. */
     int score(int k) {
-        return cornerScore[k];
+        return batch.score(k);
     }
 }

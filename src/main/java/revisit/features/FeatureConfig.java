@@ -36,7 +36,7 @@ import java.util.Objects;
  * @param angleBins     number of discrete orientations for which the BRIEF pattern is pre-rotated; 8..360.
  *                      Default 90 (4 degree steps): Rublee et al. 2011 use 30, but on rotated photos 90 bins gave
  *                      about 20% more correct matches at 30 and 45 degrees than 30 bins (docs/FEATURES.md); the
- *                      table is 90 x 512 ints (184 KB).
+ *                      table is 90 x 256 longs (184 KB).
  * @param patternSeed   seed of the random BRIEF test pattern; any value. Default fixed so that descriptors of
  *                      different runs and machines are comparable; changing it invalidates trained vocabularies.
  */

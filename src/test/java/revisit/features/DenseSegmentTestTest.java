@@ -46,7 +46,9 @@ class DenseSegmentTestTest {
         int total = 0;
         for (int y = BORDER; y < image.height - BORDER; y++) {
             int rowStart = image.startIndex + y * image.stride;
-            int n = sparse.scanRow(image.data, rowStart, image.stride, BORDER, image.width - BORDER);
+            sparse.startLevel();
+            sparse.scanRow(image.data, rowStart, image.stride, rows, y, BORDER, image.width - BORDER);
+            int n = sparse.flush(image.data);
             assertEquals(n, dense.scanRow(image.data, rowStart, image.stride, rows, y, BORDER,
                     image.width - BORDER), "corners in row " + y);
             for (int k = 0; k < n; k++) {
