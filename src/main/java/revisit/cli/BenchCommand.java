@@ -90,7 +90,7 @@ final class BenchCommand implements Callable<Integer> {
     boolean verbose;
 
     /** Frames of the first session scanned once, unreported, so the timed runs do not pay JIT compilation. */
-    static final int WARM_UP_FRAMES = 100;
+    static final int WARM_UP_FRAMES = 300;
 
     @Override
     public Integer call() {
