@@ -23,14 +23,14 @@ package revisit.verification;
  *                           noise level used in model selection is this / sqrt(3.84)
  * @param confidence         probability that RANSAC draws at least one all-inlier sample, in (0, 1), typical
  *                           0.99-0.999; default 0.99 (Hartley &amp; Zisserman 2004, sec. 4.7.1)
- * @param maxIterations      cap on RANSAC samples per model, typical 200-5000; default 300, measured
+ * @param maxIterations      cap on RANSAC samples per model, typical 200-5000; default 250, measured
  *                           (docs/VERIFICATION.md, "The sample cap"): a pair below the acceptance bar draws the
- *                           whole cap at one five-point solve (7-8 us) each, so the cap sets the worst case,
- *                           7.5-9 ms at 1000 samples and about 2.5-3 ms at 300. 300 samples still hold an
- *                           all-inlier sample of a model with 40% inliers with probability 95% (50%: 99.99%; at
- *                           the 30% bar 52%, against 91% at 1000). Scans of both generated scenarios gave the same
- *                           closures at caps 1000, 350, 300 and 250 on the demo and one trusted closure fewer of
- *                           156 at 640x480, same recall; the Middlebury pair table was identical
+ *                           whole cap at one five-point solve (7-10 us) each, so the cap sets the worst case:
+ *                           7.5-9 ms at 1000 samples, 2.0-2.5 ms at 250 (VerificationCpuTime). 250 samples still
+ *                           hold an all-inlier sample of a model with 40% inliers with probability 92% (50%:
+ *                           99.96%; at the 30% bar 45%, against 91% at 1000). Scans of both generated scenarios
+ *                           gave the same closures at caps 1000, 350, 300 and 250 on the demo and one trusted
+ *                           closure fewer of 156 at 640x480, same recall; the Middlebury pair table was identical
  * @param refineIterations   cap on Levenberg-Marquardt steps of the pose refinement, typical 5-50; default 20
  *                           (common practice)
  * @param fundamentalSolver  minimal solver for the uncalibrated model; default seven points (fewer samples)
@@ -82,7 +82,7 @@ public record VerificationConfig(double ratio, int maxHammingBits, int minInlier
 
     /** The documented defaults. */
     public static VerificationConfig defaults() {
-        return new VerificationConfig(0.8, 80, 20, 0.3, 2.0, 0.99, 300, 20, FundamentalSolver.SEVEN_POINT,
+        return new VerificationConfig(0.8, 80, 20, 0.3, 2.0, 0.99, 250, 20, FundamentalSolver.SEVEN_POINT,
                 20120601L);
     }
 
