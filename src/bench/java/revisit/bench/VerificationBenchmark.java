@@ -146,7 +146,7 @@ public class VerificationBenchmark {
         return result;
     }
 
-    /** The worst case for RANSAC: 200 matches with no geometry (30% bar: the cap of 1000 samples binds). */
+    /** The worst case for RANSAC: 200 matches with no geometry (30% bar: the sample cap, 250 by default, binds). */
     @Benchmark
     public Verification verifyMatchesWithoutGeometry(CpuTimeCounters cpu) {
         long start = CpuTimeCounters.now();
