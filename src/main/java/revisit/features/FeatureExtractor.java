@@ -34,6 +34,9 @@ public final class FeatureExtractor {
     private final LevelCorners ranked = new LevelCorners();
     private final int[] quota;
     private int[] chosen = new int[0];
+    /** Per chosen keypoint of the current level: pixel index in the smoothed level and orientation bin. */
+    private int[] centre = new int[0];
+    private int[] bin = new int[0];
 
     /** @param config settings, see {@link FeatureConfig} */
     public FeatureExtractor(FeatureConfig config) {
@@ -118,41 +121,55 @@ public final class FeatureExtractor {
     }
 
     private FrameFeatures describe(int levels, int total) {
-        float[] x = new float[total];
-        float[] y = new float[total];
-        float[] angle = new float[total];
-        int[] level = new int[total];
-        float[] scale = new float[total];
-        float[] response = new float[total];
-        long[] descriptors = new long[total * FrameFeatures.STRIDE];
+        FrameFeatures out = new FrameFeatures(total, new float[total], new float[total], new float[total],
+                new int[total], new float[total], new float[total], new long[total * FrameFeatures.STRIDE]);
         if (chosen.length < RANKED_PER_FEATURE * config.maxFeatures()) {
             chosen = new int[RANKED_PER_FEATURE * config.maxFeatures()];
+            centre = new int[config.maxFeatures()];
+            bin = new int[config.maxFeatures()];
         }
-        int stride = pyramid.smoothStride();
-        brief.prepare(stride);
+        brief.prepare(pyramid.smoothStride());
         int n = 0;
         for (int l = 0; l < levels; l++) {
-            GrayU8 raw = pyramid.raw(l);
-            LevelCorners c = rank(l, raw);
-            int picked = selector.select(c, quota[l], raw.width, raw.height, chosen);
-            double sx = pyramid.toLevel0X(l);
-            double sy = pyramid.toLevel0Y(l);
-            float levelScale = (float) Math.pow(config.scaleFactor(), l);
-            byte[] smooth = pyramid.smooth(l);
-            for (int k = 0; k < picked; k++, n++) {
-                int i = chosen[k];
-                int px = c.x(i);
-                int py = c.y(i);
-                double theta = IntensityCentroid.orientation(raw, px, py);
-                x[n] = (float) ((px + 0.5) * sx - 0.5);
-                y[n] = (float) ((py + 0.5) * sy - 0.5);
-                angle[n] = (float) theta;
-                level[n] = l;
-                scale[n] = levelScale;
-                response[n] = c.score(i);
-                brief.describe(smooth, py * stride + px, brief.bin(theta), descriptors, n * FrameFeatures.STRIDE);
-            }
+            n = describeLevel(l, out, n);
         }
-        return new FrameFeatures(n, x, y, angle, level, scale, response, descriptors);
+        return n == total ? out : new FrameFeatures(n, out.x(), out.y(), out.angleRad(), out.level(), out.scale(),
+                out.response(), out.descriptors());
+    }
+
+    /**
+     * Picks the features of level {@code l} and writes them into {@code out} from index {@code n}: position,
+     * orientation and score first, then the smoothed level around them ({@link ScalePyramid#smoothPatches}) and the
+     * descriptors. Returns the index after the last feature written.
+     */
+    private int describeLevel(int l, FrameFeatures out, int n) {
+        GrayU8 raw = pyramid.raw(l);
+        LevelCorners c = rank(l, raw);
+        int picked = selector.select(c, quota[l], raw.width, raw.height, chosen);
+        double sx = pyramid.toLevel0X(l);
+        double sy = pyramid.toLevel0Y(l);
+        float levelScale = (float) Math.pow(config.scaleFactor(), l);
+        int stride = pyramid.smoothStride();
+        pyramid.clearPatches();
+        for (int k = 0; k < picked; k++) {
+            int i = chosen[k];
+            int px = c.x(i);
+            int py = c.y(i);
+            double theta = IntensityCentroid.orientation(raw, px, py);
+            out.x()[n + k] = (float) ((px + 0.5) * sx - 0.5);
+            out.y()[n + k] = (float) ((py + 0.5) * sy - 0.5);
+            out.angleRad()[n + k] = (float) theta;
+            out.level()[n + k] = l;
+            out.scale()[n + k] = levelScale;
+            out.response()[n + k] = c.score(i);
+            centre[k] = py * stride + px;
+            bin[k] = brief.bin(theta);
+            pyramid.markPatch(l, px, py);
+        }
+        byte[] smoothed = pyramid.smoothPatches(l);
+        for (int k = 0; k < picked; k++) {
+            brief.describe(smoothed, centre[k], bin[k], out.descriptors(), (n + k) * FrameFeatures.STRIDE);
+        }
+        return n + picked;
     }
 }
